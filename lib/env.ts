@@ -1,0 +1,39 @@
+import { z } from "zod";
+
+// Every setting the server reads, validated once. A missing or malformed
+// variable stops start-up with its name in the message.
+const ZServerEnv = z.object({
+  DATABASE_URL: z.url({ protocol: /^postgres(ql)?$/, error: "must be a postgres:// URL" }),
+  AUTH_SECRET: z.string().min(32, "must be at least 32 characters"),
+  APP_URL: z.url().default("http://127.0.0.1:3000"),
+  DATABASE_POOL_MAX: z.coerce.number().int().min(1).max(100).default(10),
+  // Object storage and mail are filled in by later features; optional until then.
+  S3_ENDPOINT: z.url().optional(),
+  S3_REGION: z.string().min(1).default("us-east-1"),
+  S3_BUCKET: z.string().min(3).optional(),
+  S3_ACCESS_KEY_ID: z.string().min(1).optional(),
+  S3_SECRET_ACCESS_KEY: z.string().min(1).optional(),
+  S3_FORCE_PATH_STYLE: z.stringbool().default(false),
+  SMTP_URL: z.url({ protocol: /^smtps?$/, error: "must be an smtp:// or smtps:// URL" }).optional(),
+  MAIL_FROM: z.string().min(3).default("Tankwright <reports@tankwright.test>"),
+});
+export type TServerEnv = z.infer<typeof ZServerEnv>;
+
+export function parseServerEnv(source: Record<string, string | undefined>): TServerEnv {
+  const result = ZServerEnv.safeParse({
+    ...source,
+    AUTH_SECRET: source.AUTH_SECRET ?? source.NEXTAUTH_SECRET,
+    APP_URL: source.APP_URL ?? source.NEXTAUTH_URL,
+  });
+  if (!result.success) {
+    const lines = result.error.issues.map((i) => `  ${i.path.join(".") || "(environment)"}: ${i.message}`);
+    throw new Error(`Invalid environment:\n${lines.join("\n")}`);
+  }
+  return result.data;
+}
+
+let cached: TServerEnv | undefined;
+export function serverEnv(): TServerEnv {
+  cached ??= parseServerEnv(process.env);
+  return cached;
+}

@@ -1,0 +1,61 @@
+#!/usr/bin/env bash
+# npm start (or npm run dev with --dev): everything a laptop needs, then the app
+# on http://127.0.0.1:3000. Safe to run again; Ctrl-C stops what it started.
+set -euo pipefail
+ROOT=$(cd "$(dirname "$0")/.." && pwd)
+. "$ROOT/scripts/lib.sh"
+
+MODE=start; [ "${1:-}" = "--dev" ] && MODE=dev
+PG_PORT=${TANKWRIGHT_PG_PORT:-54329}
+APP_PORT=${PORT:-3000}
+PG_DATA="$ROOT/.data/postgres"
+PIDS=()
+
+cleanup() {
+  trap - INT TERM EXIT
+  for pid in "${PIDS[@]}"; do kill "$pid" 2>/dev/null || true; done
+  wait 2>/dev/null || true
+  if [ -n "${OWN_PG:-}" ]; then log "stopping PostgreSQL"; stop_cluster "$PG_DATA"; fi
+}
+trap cleanup INT TERM EXIT
+
+ensure_node_modules
+if [ -z "${DATABASE_URL:-}" ]; then
+  ensure_cluster "$PG_DATA" "$PG_PORT"
+  OWN_PG=$PG_STARTED
+  ensure_database "$PG_PORT" tankwright
+  export DATABASE_URL="postgres://postgres@127.0.0.1:$PG_PORT/tankwright"
+fi
+ensure_auth_secret
+export APP_URL="${APP_URL:-http://127.0.0.1:$APP_PORT}" NEXTAUTH_URL="${NEXTAUTH_URL:-${APP_URL:-http://127.0.0.1:$APP_PORT}}"
+
+log "applying migrations"
+(cd "$ROOT" && npx tsx scripts/migrate.ts)
+log "seeding the demo scenario (once)"
+(cd "$ROOT" && npx tsx scripts/seed.ts)
+
+cd "$ROOT"
+if [ "$MODE" = dev ]; then
+  npx next dev -H 127.0.0.1 -p "$APP_PORT" & PIDS+=($!)
+else
+  log "building the app"
+  npx next build >"$ROOT/.data/build.log" 2>&1 || { tail -40 "$ROOT/.data/build.log" >&2; die "next build failed (log: .data/build.log)"; }
+  npx next start -H 127.0.0.1 -p "$APP_PORT" & PIDS+=($!)
+fi
+wait_for_http "http://127.0.0.1:$APP_PORT/sign-in" 120 || die "the app did not answer on port $APP_PORT"
+
+cat <<MSG
+
+  Tankwright is serving on $APP_URL
+
+  Demo sign-ins (password: tankwright-demo)
+    officer@tankwright.test     chief officer, MV Skerry Lantern
+    master@tankwright.test      master, MV Skerry Lantern
+    super@tankwright.test       technical superintendent
+    surveyor@tankwright.test    class surveyor
+    admin@tankwright.test       company administrator
+
+  Ctrl-C stops the app${OWN_PG:+ and PostgreSQL}.
+
+MSG
+wait "${PIDS[@]}"

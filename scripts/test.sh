@@ -1,0 +1,70 @@
+#!/usr/bin/env bash
+# npm test: a throwaway database on a cluster of its own, then unit, integration
+# and browser tests. Ends with one line "tests: N passed, N failed".
+set -uo pipefail
+ROOT=$(cd "$(dirname "$0")/.." && pwd)
+. "$ROOT/scripts/lib.sh"
+set -e
+
+PG_PORT=${TANKWRIGHT_TEST_PG_PORT:-54339}
+APP_PORT=${TANKWRIGHT_TEST_APP_PORT:-3100}
+PG_DATA="$ROOT/.data/postgres-test"
+RESULTS="$ROOT/.data/test-results"
+APP_PID=""
+
+cleanup() {
+  trap - INT TERM EXIT
+  [ -n "$APP_PID" ] && kill "$APP_PID" 2>/dev/null || true
+  wait 2>/dev/null || true
+  [ -n "${PG_BIN:-}" ] && stop_cluster "$PG_DATA"
+}
+trap cleanup INT TERM EXIT
+
+ensure_node_modules
+ensure_chromium
+# fsync off: this cluster holds only throwaway test data.
+ensure_cluster "$PG_DATA" "$PG_PORT" "-c fsync=off -c synchronous_commit=off -c full_page_writes=off"
+recreate_database "$PG_PORT" tankwright_test
+export DATABASE_URL="postgres://postgres@127.0.0.1:$PG_PORT/tankwright_test"
+export AUTH_SECRET="test-secret-for-throwaway-databases-only-0123456789"
+export NEXTAUTH_SECRET="$AUTH_SECRET"
+export APP_URL="http://127.0.0.1:$APP_PORT" NEXTAUTH_URL="http://127.0.0.1:$APP_PORT"
+export TEST_BASE_URL="$APP_URL"
+cd "$ROOT"
+log "applying migrations to the test database"
+npx tsx scripts/migrate.ts
+
+rm -rf "$RESULTS"; mkdir -p "$RESULTS"
+FAILED_STAGES=()
+run_project() {
+  log "vitest: $1 tests"
+  npx vitest run --project "$1" --reporter=default --reporter=json --outputFile.json="$RESULTS/$1.json" || FAILED_STAGES+=("$1")
+}
+
+run_project unit
+
+log "building the app for the integration and browser tests"
+if npx next build >"$RESULTS/build.log" 2>&1; then
+  npx next start -H 127.0.0.1 -p "$APP_PORT" >"$RESULTS/app.log" 2>&1 & APP_PID=$!
+  if wait_for_http "$APP_URL/sign-in" 90; then
+    run_project integration
+    run_project e2e
+  else
+    tail -40 "$RESULTS/app.log"; FAILED_STAGES+=("app-start")
+  fi
+else
+  tail -60 "$RESULTS/build.log"; FAILED_STAGES+=("build")
+fi
+
+set +e
+[ ${#FAILED_STAGES[@]} -gt 0 ] && echo "failed stages: ${FAILED_STAGES[*]}"
+node -e '
+const fs = require("fs"), path = require("path");
+let passed = 0, failed = 0, skipped = 0;
+for (const f of fs.readdirSync(process.argv[1]).filter((f) => f.endsWith(".json"))) {
+  const r = JSON.parse(fs.readFileSync(path.join(process.argv[1], f), "utf8"));
+  passed += r.numPassedTests; failed += r.numFailedTests; skipped += r.numPendingTests + (r.numTodoTests || 0);
+}
+console.log(`tests: ${passed} passed, ${failed} failed` + (skipped ? `, ${skipped} skipped` : ""));
+' "$RESULTS"
+[ ${#FAILED_STAGES[@]} -eq 0 ]
