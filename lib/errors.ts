@@ -57,3 +57,10 @@ export function errorBody(error: AppError): TErrorBody {
 export function issuesFromZod(issues: readonly { path: readonly PropertyKey[]; message: string }[]): TIssue[] {
   return issues.map((i) => ({ path: i.path.map(String).join(".") || "(body)", message: i.message }));
 }
+
+/** The PostgreSQL error code behind a driver or ORM error, if there is one. */
+export function databaseErrorCode(error: unknown): string | undefined {
+  const e = (error as { cause?: unknown } | null)?.cause ?? error;
+  const code = (e as { code?: unknown } | null)?.code;
+  return typeof code === "string" ? code : undefined;
+}

@@ -1,0 +1,15 @@
+import { requireActor } from "@/lib/auth/actor";
+import { created, readJson, route } from "@/lib/http/route";
+import { ZVesselInput } from "@/lib/schemas/vessel";
+import { createVesselAs, listVisibleVessels } from "@/lib/services/vessels";
+
+export const GET = route(async () => {
+  const actor = await requireActor();
+  return { vessels: await listVisibleVessels(actor) };
+});
+
+export const POST = route(async (req) => {
+  const actor = await requireActor();
+  const input = await readJson(req, ZVesselInput);
+  return created({ vessel: await createVesselAs(actor, input) });
+});

@@ -1,0 +1,14 @@
+import type { TMembershipLike } from "./roles";
+
+/** The sections a user's roles open; pages check access again themselves. */
+export function navLinks(memberships: readonly TMembershipLike[]) {
+  const roles = new Set(memberships.map((m) => m.role));
+  const links: { href: string; label: string }[] = [];
+  if (roles.has("superintendent") || roles.has("admin")) links.push({ href: "/fleet", label: "Fleet" });
+  if (roles.has("officer") || roles.has("master") || roles.has("superintendent") || roles.has("admin")) {
+    links.push({ href: "/vessels", label: "Vessels" });
+  }
+  if (roles.has("surveyor")) links.push({ href: "/shared", label: "Shared reports" });
+  if (roles.has("admin")) links.push({ href: "/admin", label: "Administration" });
+  return links;
+}

@@ -1,0 +1,22 @@
+// Display formats: dates are unambiguous (2026-03-14), times say their offset.
+
+/** "UTC+08:00", "UTC−03:00", "UTC+05:30". */
+export function formatUtcOffset(minutes: number): string {
+  const sign = minutes < 0 ? "−" : "+";
+  const abs = Math.abs(minutes);
+  const hh = String(Math.floor(abs / 60)).padStart(2, "0");
+  const mm = String(abs % 60).padStart(2, "0");
+  return `UTC${sign}${hh}:${mm}`;
+}
+
+/** ISO calendar date of an instant in UTC, or at a ship's offset when given. */
+export function formatDate(at: Date, offsetMinutes = 0): string {
+  return new Date(at.getTime() + offsetMinutes * 60_000).toISOString().slice(0, 10);
+}
+
+/** "2026-03-14 09:30 UTC" or, with the ship's offset, "2026-03-14 17:30 (UTC+08:00)". */
+export function formatDateTime(at: Date, offsetMinutes?: number | null): string {
+  const shifted = new Date(at.getTime() + (offsetMinutes ?? 0) * 60_000).toISOString();
+  const text = `${shifted.slice(0, 10)} ${shifted.slice(11, 16)}`;
+  return offsetMinutes === undefined || offsetMinutes === null ? `${text} UTC` : `${text} (${formatUtcOffset(offsetMinutes)})`;
+}

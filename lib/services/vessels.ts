@@ -1,0 +1,29 @@
+import "server-only";
+// What the API and the admin pages do with vessels, behind the one authorization module.
+import { createVessel, listVessels, updateVessel } from "@/db/queries/vessels";
+import { authorizeOrg, authorizeVessel } from "@/lib/auth/authorize";
+import type { TActor } from "@/lib/auth/actor";
+import { visibleVesselScope } from "@/lib/auth/roles";
+import type { TVesselInput } from "@/lib/schemas/vessel";
+
+export const VESSEL_READERS = ["officer", "master", "superintendent", "admin"] as const;
+export const VESSEL_EDITORS = ["superintendent", "admin"] as const;
+
+/** Every vessel the actor may open, across the companies they hold roles in. */
+export async function listVisibleVessels(actor: TActor) {
+  const out = [];
+  for (const [orgId, ids] of visibleVesselScope(actor.memberships)) {
+    out.push(...(await listVessels({ orgId, vesselIds: ids ? [...ids] : undefined })));
+  }
+  return out;
+}
+
+export async function createVesselAs(actor: TActor, input: TVesselInput) {
+  const { orgId } = await authorizeOrg({ actor, allow: ["admin"] });
+  return createVessel({ orgId, actorUserId: actor.userId, input });
+}
+
+export async function updateVesselAs(actor: TActor, vesselId: string, input: TVesselInput) {
+  const { orgId } = await authorizeVessel({ actor, vesselId, allow: VESSEL_EDITORS });
+  return updateVessel({ orgId, vesselId, actorUserId: actor.userId, input });
+}
