@@ -1,4 +1,5 @@
 import { requireActor } from "@/lib/auth/actor";
+import { authorizeOrg } from "@/lib/auth/authorize";
 import { created, readJson, route } from "@/lib/http/route";
 import { ZVesselInput } from "@/lib/schemas/vessel";
 import { createVesselAs, listVisibleVessels } from "@/lib/services/vessels";
@@ -10,6 +11,7 @@ export const GET = route(async () => {
 
 export const POST = route(async (req) => {
   const actor = await requireActor();
+  await authorizeOrg({ actor, allow: ["admin"] });
   const input = await readJson(req, ZVesselInput);
   return created({ vessel: await createVesselAs(actor, input) });
 });

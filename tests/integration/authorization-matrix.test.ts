@@ -1,0 +1,140 @@
+// Every protected route handler and page × every role × own vessel / other
+// vessel of the same company / other company → the expected status.
+import { eq } from "drizzle-orm";
+import { beforeAll, describe, expect, it } from "vitest";
+import { memberships } from "@/db/schema";
+import type { TRole } from "@/lib/vocabulary";
+import { anonymousClient, signIn, type TClient } from "../fixtures/http";
+import { buildScenario, fakeImo, PASSWORD, testDb, type TScenario } from "../fixtures/scenario";
+
+type TScope = "own" | "sibling" | "other";
+type TWho = TRole | "anonymous";
+type TCase = {
+  name: string;
+  method?: string;
+  path: (s: TScenario, scope: TScope) => string;
+  body?: (s: TScenario, scope: TScope) => unknown;
+  /** Scopes that matter for this route; routes without a record take only "own". */
+  scopes: TScope[];
+  expect: (who: TWho, scope: TScope) => number;
+};
+
+const ROLES: TRole[] = ["officer", "master", "superintendent", "admin", "surveyor"];
+const vesselOf = (s: TScenario, scope: TScope) =>
+  scope === "own" ? s.ownVessel : scope === "sibling" ? s.siblingVessel : s.otherVessel;
+
+/** Read a vessel record: its own officer/master, or the office of its company. */
+const vesselReader = (who: TWho, scope: TScope) => {
+  if (who === "anonymous") return 401;
+  if (scope === "other" || who === "surveyor") return 404;
+  if (who === "officer" || who === "master") return scope === "own" ? 200 : 404;
+  return 200;
+};
+/** Edit a vessel's particulars: the office; a ship's officer/master sees the record but may not edit it. */
+const vesselEditor = (who: TWho, scope: TScope) => {
+  const read = vesselReader(who, scope);
+  if (read !== 200) return read;
+  return who === "officer" || who === "master" ? 403 : 200;
+};
+const adminOnly = (ok: number) => (who: TWho) => (who === "anonymous" ? 401 : who === "admin" ? ok : 403);
+const adminOnlyScoped = (ok: number) => (who: TWho, scope: TScope) =>
+  who === "anonymous" ? 401 : who !== "admin" ? 403 : scope === "other" ? 404 : ok;
+
+const page = (allowed: (who: TRole, scope: TScope) => boolean) => (who: TWho, scope: TScope) =>
+  who === "anonymous" ? 307 : allowed(who, scope) ? 200 : 404;
+const office = (who: TRole) => who === "superintendent" || who === "admin";
+
+function vesselBody(s: TScenario, scope: TScope) {
+  const v = vesselOf(s, scope);
+  return { name: v.name, imoNumber: v.imoNumber, vesselType: v.vesselType, frameFirst: v.frameFirst, frameLast: v.frameLast, midshipFromFrame: 60, midshipToFrame: 140 };
+}
+
+const CASES: TCase[] = [
+  { name: "GET /api/v1/me", path: () => "/api/v1/me", scopes: ["own"], expect: (w) => (w === "anonymous" ? 401 : 200) },
+  { name: "GET /api/v1/vessels", path: () => "/api/v1/vessels", scopes: ["own"], expect: (w) => (w === "anonymous" ? 401 : 200) },
+  {
+    name: "POST /api/v1/vessels", method: "POST", path: () => "/api/v1/vessels", scopes: ["own"],
+    body: () => ({ name: "Matrix vessel", imoNumber: fakeImo(), vesselType: "oil_tanker", frameFirst: 0, frameLast: 150 }),
+    expect: adminOnly(201),
+  },
+  { name: "GET /api/v1/vessels/:id", path: (s, sc) => `/api/v1/vessels/${vesselOf(s, sc).id}`, scopes: ["own", "sibling", "other"], expect: vesselReader },
+  {
+    name: "PATCH /api/v1/vessels/:id", method: "PATCH", path: (s, sc) => `/api/v1/vessels/${vesselOf(s, sc).id}`,
+    body: vesselBody, scopes: ["own", "sibling", "other"], expect: vesselEditor,
+  },
+  { name: "GET /api/v1/vessels/:id/tanks", path: (s, sc) => `/api/v1/vessels/${vesselOf(s, sc).id}/tanks`, scopes: ["own", "sibling", "other"], expect: vesselReader },
+  { name: "GET /api/v1/users", path: () => "/api/v1/users", scopes: ["own"], expect: adminOnly(200) },
+  {
+    name: "POST /api/v1/users", method: "POST", path: () => "/api/v1/users", scopes: ["own"],
+    body: (s) => ({ email: `new-${Math.random().toString(36).slice(2)}-${s.run}@tests.tankwright.test`, name: "New person", password: "a-long-enough-password", role: "superintendent" }),
+    expect: adminOnly(201),
+  },
+  {
+    name: "POST /api/v1/users/:id/memberships", method: "POST",
+    path: (s, sc) => `/api/v1/users/${sc === "other" ? s.otherAdmin.id : s.spare.id}/memberships`,
+    body: (s, sc) => ({ role: "officer", vesselId: sc === "other" ? s.otherVessel.id : s.siblingVessel.id }),
+    scopes: ["own", "other"], expect: adminOnlyScoped(201),
+  },
+  {
+    name: "DELETE /api/v1/memberships/:id", method: "DELETE",
+    path: (s, sc) => `/api/v1/memberships/${sc === "other" ? s.otherAdmin.membershipId : s.spare.membershipId}`,
+    scopes: ["other", "own"], expect: adminOnlyScoped(200),
+  },
+  { name: "page /fleet", path: () => "/fleet", scopes: ["own"], expect: page(office) },
+  { name: "page /vessels", path: () => "/vessels", scopes: ["own"], expect: page(() => true) },
+  { name: "page /vessels/:id", path: (s, sc) => `/vessels/${vesselOf(s, sc).id}`, scopes: ["own", "sibling", "other"], expect: (w, sc) => (w === "anonymous" ? 307 : vesselReader(w, sc)) },
+  { name: "page /shared", path: () => "/shared", scopes: ["own"], expect: page((w) => w === "surveyor") },
+  { name: "page /admin", path: () => "/admin", scopes: ["own"], expect: page((w) => w === "admin") },
+  { name: "page /admin/users", path: () => "/admin/users", scopes: ["own"], expect: page((w) => w === "admin") },
+  { name: "page /admin/vessels", path: () => "/admin/vessels", scopes: ["own"], expect: page((w) => w === "admin") },
+  { name: "page /admin/vessels/new", path: () => "/admin/vessels/new", scopes: ["own"], expect: page((w) => w === "admin") },
+  {
+    name: "page /admin/vessels/:id", path: (s, sc) => `/admin/vessels/${vesselOf(s, sc).id}`, scopes: ["own", "sibling", "other"],
+    expect: (w, sc) => (w === "anonymous" ? 307 : vesselEditor(w, sc) === 200 ? 200 : 404),
+  },
+];
+
+let scenario: TScenario;
+const clients = new Map<TWho, TClient>();
+
+beforeAll(async () => {
+  scenario = await buildScenario();
+  clients.set("anonymous", anonymousClient());
+  for (const role of ROLES) clients.set(role, await signIn(scenario.users[role].email, PASSWORD));
+});
+
+describe("authorization matrix", () => {
+  // Runs the admin's DELETE last for each scope, after every other role was refused.
+  const WHO: TWho[] = ["anonymous", "officer", "master", "superintendent", "surveyor", "admin"];
+  for (const c of CASES) {
+    for (const scope of c.scopes) {
+      for (const who of WHO) {
+        const expected = () => c.expect(who, scope);
+        it(`${c.name} · ${who} · ${scope} vessel`, async () => {
+          const res = await clients.get(who)!.request(c.path(scenario, scope), {
+            method: c.method ?? "GET",
+            json: c.body?.(scenario, scope),
+          });
+          expect(res.status, `${c.name} as ${who} on ${scope}`).toBe(expected());
+          if (res.status === 404 && c.name.startsWith("GET /api")) {
+            // A refused record is not leaked in the body.
+            const text = await res.text();
+            expect(text).not.toContain(vesselOf(scenario, scope).name);
+          }
+        });
+      }
+    }
+  }
+
+  it("the refused DELETE of another company's role changed nothing", async () => {
+    const row = await testDb().query.memberships.findFirst({ where: eq(memberships.id, scenario.otherAdmin.membershipId) });
+    expect(row).toBeDefined();
+  });
+
+  it("an officer's vessel list holds only their own vessel; a surveyor's is empty", async () => {
+    const officer = (await (await clients.get("officer")!.request("/api/v1/vessels")).json()) as { vessels: { id: string }[] };
+    expect(officer.vessels.map((v) => v.id)).toEqual([scenario.ownVessel.id]);
+    const surveyor = (await (await clients.get("surveyor")!.request("/api/v1/vessels")).json()) as { vessels: unknown[] };
+    expect(surveyor.vessels).toEqual([]);
+  });
+});
