@@ -123,3 +123,14 @@ wait_for_http() {
     sleep 0.3
   done
 }
+
+# Fails when something already answers on the port (an old server would hide ours).
+require_free_port() {
+  if node -e 'const s=require("net").connect(+process.argv[1],"127.0.0.1");s.on("connect",()=>process.exit(0));s.on("error",()=>process.exit(1))' "$1"; then
+    die "port $1 is already in use; stop what is running there (or set PORT) and try again"
+  fi
+}
+
+# start_bg: runs a command in its own process group, so that stop_bg ends it with all its children.
+start_bg() { setsid "$@" & BG_PID=$!; }
+stop_bg() { [ -n "${1:-}" ] && kill -TERM -- "-$1" 2>/dev/null || true; }

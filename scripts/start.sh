@@ -13,7 +13,7 @@ PIDS=()
 
 cleanup() {
   trap - INT TERM EXIT
-  for pid in "${PIDS[@]}"; do kill "$pid" 2>/dev/null || true; done
+  for pid in "${PIDS[@]}"; do stop_bg "$pid"; done
   wait 2>/dev/null || true
   if [ -n "${OWN_PG:-}" ]; then log "stopping PostgreSQL"; stop_cluster "$PG_DATA"; fi
 }
@@ -35,12 +35,14 @@ log "seeding the demo scenario (once)"
 (cd "$ROOT" && npx tsx scripts/seed.ts)
 
 cd "$ROOT"
+require_free_port "$APP_PORT"
+NEXT="$ROOT/node_modules/.bin/next"
 if [ "$MODE" = dev ]; then
-  npx next dev -H 127.0.0.1 -p "$APP_PORT" & PIDS+=($!)
+  start_bg "$NEXT" dev -H 127.0.0.1 -p "$APP_PORT"; PIDS+=("$BG_PID")
 else
   log "building the app"
-  npx next build >"$ROOT/.data/build.log" 2>&1 || { tail -40 "$ROOT/.data/build.log" >&2; die "next build failed (log: .data/build.log)"; }
-  npx next start -H 127.0.0.1 -p "$APP_PORT" & PIDS+=($!)
+  "$NEXT" build >"$ROOT/.data/build.log" 2>&1 || { tail -40 "$ROOT/.data/build.log" >&2; die "next build failed (log: .data/build.log)"; }
+  start_bg "$NEXT" start -H 127.0.0.1 -p "$APP_PORT"; PIDS+=("$BG_PID")
 fi
 wait_for_http "http://127.0.0.1:$APP_PORT/sign-in" 120 || die "the app did not answer on port $APP_PORT"
 

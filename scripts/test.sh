@@ -14,7 +14,7 @@ APP_PID=""
 
 cleanup() {
   trap - INT TERM EXIT
-  [ -n "$APP_PID" ] && kill "$APP_PID" 2>/dev/null || true
+  stop_bg "$APP_PID"
   wait 2>/dev/null || true
   [ -n "${PG_BIN:-}" ] && stop_cluster "$PG_DATA"
 }
@@ -44,8 +44,9 @@ run_project() {
 run_project unit
 
 log "building the app for the integration and browser tests"
-if npx next build >"$RESULTS/build.log" 2>&1; then
-  npx next start -H 127.0.0.1 -p "$APP_PORT" >"$RESULTS/app.log" 2>&1 & APP_PID=$!
+require_free_port "$APP_PORT"
+if node_modules/.bin/next build >"$RESULTS/build.log" 2>&1; then
+  start_bg node_modules/.bin/next start -H 127.0.0.1 -p "$APP_PORT" >"$RESULTS/app.log" 2>&1; APP_PID=$BG_PID
   if wait_for_http "$APP_URL/sign-in" 90; then
     run_project integration
     run_project e2e

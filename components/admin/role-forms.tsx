@@ -15,7 +15,7 @@ export function GrantRoleForm({ action, userId, vessels }: { action: TAction; us
       <FormStatus state={state} />
       <input type="hidden" name="userId" value={userId} />
       <div className="grid gap-2 sm:grid-cols-[1fr_1fr_auto] sm:items-end">
-        <RoleFields state={state} vessels={vessels} />
+        <RoleFields state={state} vessels={vessels} compact />
         <Button type="submit" variant="secondary" disabled={pending}>
           Grant role
         </Button>

@@ -10,7 +10,7 @@ import { fieldError, fieldValue, FormStatus } from "./form-status";
 type TAction = (prev: TActionState, form: FormData) => Promise<TActionState>;
 type TVesselOption = { id: string; name: string };
 
-export function RoleFields({ state, vessels }: { state: TActionState; vessels: TVesselOption[] }) {
+export function RoleFields({ state, vessels, compact = false }: { state: TActionState; vessels: TVesselOption[]; compact?: boolean }) {
   return (
     <>
       <SelectField
@@ -25,7 +25,7 @@ export function RoleFields({ state, vessels }: { state: TActionState; vessels: T
         name="vesselId"
         defaultValue={fieldValue(state, "vesselId")}
         error={fieldError(state, "vesselId")}
-        hint="For officer and master only; the other roles apply company-wide"
+        hint={compact ? undefined : "For officer and master only; the other roles apply company-wide"}
         options={[{ value: "", label: "— company-wide —" }, ...vessels.map((v) => ({ value: v.id, label: v.name }))]}
       />
     </>

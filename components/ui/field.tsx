@@ -15,7 +15,7 @@ function FieldShell({ label, name, error, hint, children }: TFieldProps & { chil
       {hint && !error ? <p id={`${name}-hint`} className="mt-1 text-xs text-slate-600">{hint}</p> : null}
       {error ? (
         <p id={`${name}-error`} role="alert" className="mt-1 text-sm text-red-700">
-          {label} {error}
+          {/^[a-z]/.test(error) ? `${label} ${error}` : error}
         </p>
       ) : null}
     </div>

@@ -1,8 +1,6 @@
 import { z } from "zod";
 import { ROLES, VESSEL_ROLES } from "@/lib/vocabulary";
-
-const optionalText = (max: number) =>
-  z.preprocess((v) => (typeof v === "string" && v.trim() === "" ? undefined : v), z.string().trim().max(max).optional());
+import { optionalText } from "./common";
 
 export const ZMembershipInput = z
   .object({

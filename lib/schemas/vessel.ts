@@ -1,12 +1,11 @@
 import { z } from "zod";
 import { checkImoNumber } from "@/lib/imo";
 import { VESSEL_TYPES } from "@/lib/vocabulary";
+import { numberFromForm, optionalText, wholeNumber } from "./common";
 
-const frame = z.coerce.number({ error: "must be a frame number" }).int("must be a whole frame number").min(-50).max(1000);
-const optionalFrame = z.preprocess((v) => (v === "" || v === null ? undefined : v), frame.optional());
-const optionalText = (max: number) =>
-  z.preprocess((v) => (typeof v === "string" && v.trim() === "" ? undefined : v), z.string().trim().max(max).optional());
-
+const frameNumber = wholeNumber("a frame number").min(-50, "must be −50 or more").max(1000, "must be 1000 or less");
+const frame = z.preprocess(numberFromForm, frameNumber);
+const optionalFrame = z.preprocess(numberFromForm, frameNumber.optional());
 /** The IMO number: seven digits whose last is the check digit; "IMO " in front is accepted. */
 export const ZImoNumber = z.string({ error: "is required" }).transform((value, ctx) => {
   const result = checkImoNumber(value);
@@ -23,23 +22,20 @@ const vesselFields = {
   vesselType: z.enum(VESSEL_TYPES, { error: "is not a known vessel type" }),
   flag: optionalText(60),
   classSociety: optionalText(80),
-  yearBuilt: z.preprocess(
-    (v) => (v === "" || v === null ? undefined : v),
-    z.coerce.number().int().min(1950, "must be 1950 or later").max(2100).optional(),
-  ),
+  yearBuilt: z.preprocess(numberFromForm, wholeNumber("a year").min(1950, "must be 1950 or later").max(2100).optional()),
   frameFirst: frame,
   frameLast: frame,
   frameSpacingMm: z.preprocess(
-    (v) => (v === "" || v === null ? undefined : v),
-    z.coerce.number().int().min(300, "must be at least 300 mm").max(5000, "must be at most 5000 mm").optional(),
+    numberFromForm,
+    wholeNumber("a number of millimetres").min(300, "must be at least 300 mm").max(5000, "must be at most 5000 mm").optional(),
   ),
   midshipFromFrame: optionalFrame,
   midshipToFrame: optionalFrame,
   engineRoomFwdBulkheadFrame: optionalFrame,
   collisionBulkheadFrame: optionalFrame,
   utcOffsetMinutes: z.preprocess(
-    (v) => (v === "" || v === null ? undefined : v),
-    z.coerce.number().int().min(-720).max(840).optional(),
+    numberFromForm,
+    wholeNumber("a number of minutes").min(-720, "must be −720 or more").max(840, "must be 840 or less").optional(),
   ),
 };
 

@@ -45,6 +45,9 @@ export async function grantRoleAs(actor: TActor, userId: string, input: TMembers
 export async function revokeRoleAs(actor: TActor, membershipId: string) {
   const { orgId } = await authorizeOrg({ actor, allow: ["admin"] });
   if (!ZId.safeParse(membershipId).success) throw new AppError("not_found", "No such role.");
+  if (actor.memberships.some((m) => m.id === membershipId && m.role === "admin")) {
+    throw new AppError("conflict", "You cannot remove your own administrator role; ask another administrator.");
+  }
   const removed = await removeMembership({ orgId, actorUserId: actor.userId, membershipId });
   if (!removed) throw new AppError("not_found", "No such role.");
   return removed;

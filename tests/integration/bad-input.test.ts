@@ -1,6 +1,6 @@
 import { and, eq } from "drizzle-orm";
 import { beforeAll, describe, expect, it } from "vitest";
-import { users, vessels } from "@/db/schema";
+import { memberships, users, vessels } from "@/db/schema";
 import { signIn, type TClient } from "../fixtures/http";
 import { buildScenario, fakeImo, PASSWORD, testDb, type TScenario } from "../fixtures/scenario";
 
@@ -78,6 +78,12 @@ describe("bad input to route handlers", () => {
     });
     expect(res.status).toBe(400);
     expect(((await res.json()) as TBody).error.issues.map((i) => i.path)).toContain("vesselId");
+  });
+
+  it("an administrator cannot remove their own administrator role", async () => {
+    const res = await admin.request(`/api/v1/memberships/${s.users.admin.membershipId}`, { method: "DELETE" });
+    expect(res.status).toBe(409);
+    expect(await testDb().$count(memberships, eq(memberships.id, s.users.admin.membershipId))).toBe(1);
   });
 
   it("a duplicate e-mail address → 409 naming the field", async () => {

@@ -23,6 +23,12 @@ describe("vessel particulars", () => {
     expect(paths(ZVesselInput.safeParse({ ...vessel, midshipFromFrame: 150, midshipToFrame: 100 }))).toEqual(["midshipToFrame"]);
   });
 
+  it("a blank first frame is missing, not frame 0", () => {
+    const r = ZVesselInput.safeParse({ ...vessel, frameFirst: "" });
+    expect(paths(r)).toEqual(["frameFirst"]);
+    expect(r.error?.issues[0]?.message).toBe("is required");
+  });
+
   it("refuses a frame number that is not whole", () => {
     expect(paths(ZVesselInput.safeParse({ ...vessel, frameLast: "250.5" }))).toEqual(["frameLast"]);
   });
