@@ -186,3 +186,19 @@ export const DOCKING_STATUSES = ["planned", "in_progress", "completed", "cancell
 export const DOCKING_ITEM_KINDS = ["steel", "coating", "anodes", "sediment", "other"] as const;
 /** How exactly 20 % breakdown is rated: FAIR by the table of definitions, POOR by the older wording. */
 export const TWENTY_PERCENT_RULES = ["table", "wording"] as const;
+
+export type TFindingType = (typeof FINDING_TYPES)[number];
+export const FINDING_TYPE_LABELS: Record<TFindingType, string> = {
+  crack: "Crack",
+  dent: "Dent",
+  buckling: "Buckling / deformation",
+  general_corrosion: "General corrosion",
+  pitting: "Pitting",
+  grooving: "Grooving",
+  thickness_diminution: "Thickness diminution",
+  coating_breakdown: "Local coating breakdown",
+  erosion: "Cavitation / erosion",
+  contact_damage: "Contact damage",
+  loose_fitting: "Loose or missing fitting",
+  other: "Other",
+};

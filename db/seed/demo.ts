@@ -61,71 +61,8 @@ export async function seedDemo(db: TDb): Promise<boolean> {
       utcOffsetMinutes: -180,
     });
 
-    const dbHopperMembers = [
-      { kind: "bottom_girder" as const, numberFrom: 1, numberTo: 3, hasCentreGirder: true, label: "Bottom girders (CL girder + 3 side girders)" },
-      { kind: "web_frame" as const, frames: [200, 204, 208, 212, 216, 220, 224], label: "Floors / web frames" },
-      { kind: "longitudinal" as const, platingRegion: "inner_bottom" as const, numberFrom: 1, numberTo: 18 },
-      { kind: "longitudinal" as const, platingRegion: "bottom_shell" as const, numberFrom: 1, numberTo: 20 },
-      { kind: "longitudinal" as const, platingRegion: "lower_hopper" as const, numberFrom: 21, numberTo: 27 },
-    ];
-    for (const side of ["port", "starboard"] as const) {
-      await insertTank(
-        tx,
-        {
-          orgId, vesselId: skerry.id, code: `No. 2 DB WBT ${side === "port" ? "P" : "S"}`,
-          name: `No. 2 double bottom and hopper ballast tank, ${side}`, side, kind: "double_bottom_hopper",
-          frameFrom: 196, frameTo: 228, bottomAreaM2: 312, sortOrder: side === "port" ? 20 : 21,
-        },
-        dbHopperMembers,
-        [{ frame: 212, note: "Deep floor with lightening holes blanked; ballast suction bell mouth aft of it" }],
-      );
-    }
-    await insertTank(
-      tx,
-      {
-        orgId, vesselId: skerry.id, code: "No. 4 TST P", name: "No. 4 top side ballast tank, port", side: "port",
-        kind: "top_side", frameFrom: 132, frameTo: 164, bottomAreaM2: 96, sortOrder: 40,
-      },
-      [
-        { kind: "web_frame", frames: [136, 140, 144, 148, 152, 156, 160], label: "Transverse web rings" },
-        { kind: "longitudinal", platingRegion: "upper_hopper", numberFrom: 1, numberTo: 9 },
-        { kind: "longitudinal", platingRegion: "main_deck", numberFrom: 1, numberTo: 12 },
-        { kind: "longitudinal", platingRegion: "side_shell", numberFrom: 40, numberTo: 44 },
-      ],
-    );
-    await insertTank(
-      tx,
-      {
-        orgId, vesselId: skerry.id, code: "FPT", name: "Fore peak tank", side: "centre", kind: "fore_peak",
-        frameFrom: 262, frameTo: 280, bottomAreaM2: 44, atCollisionBulkhead: true, sortOrder: 90,
-      },
-      [
-        { kind: "stringer_deck", numberFrom: 1, numberTo: 3, numbering: "from_top", label: "Stringer decks 1–3, from the top" },
-        { kind: "web_frame", frames: [266, 270, 274], label: "Web frames" },
-      ],
-      [{ frame: 270, note: "Chain locker aft boundary steps here" }],
-    );
-    await insertTank(
-      tx,
-      {
-        orgId, vesselId: halcyon.id, code: "No. 3 WBT P", name: "No. 3 ballast tank, port (double bottom + side)",
-        side: "port", kind: "double_bottom_side", frameFrom: 100, frameTo: 125, bottomAreaM2: 210, atWaterline: true,
-        heatedBoundary: "Inner side to No. 3 cargo tank P (heated cargo)", sortOrder: 30,
-      },
-      [
-        { kind: "stringer_deck", numberFrom: 1, numberTo: 3, numbering: "from_top", label: "Side stringers 1–3, from the top" },
-        { kind: "bottom_girder", numberFrom: 1, numberTo: 2, hasCentreGirder: false },
-        { kind: "web_frame", frames: [104, 108, 112, 116, 120], label: "Web frames" },
-        { kind: "longitudinal", platingRegion: "side_shell", numberFrom: 20, numberTo: 38 },
-        { kind: "longitudinal", platingRegion: "longitudinal_bulkhead", numberFrom: 1, numberTo: 16 },
-        { kind: "longitudinal", platingRegion: "bottom_shell", numberFrom: 1, numberTo: 14 },
-        { kind: "longitudinal", platingRegion: "inner_bottom", numberFrom: 1, numberTo: 12 },
-      ],
-    );
-    await insertTank(tx, {
-      orgId, vesselId: halcyon.id, code: "FPT", name: "Fore peak tank", side: "centre", kind: "fore_peak",
-      frameFrom: 215, frameTo: 230, bottomAreaM2: 38, atCollisionBulkhead: true, sortOrder: 90,
-    });
+    await seedSkerryLanternTanks(tx, orgId, skerry.id);
+    await seedBriskHalcyonTanks(tx, orgId, halcyon.id);
 
     const users: Record<string, string> = {};
     for (const u of DEMO_USERS) {
@@ -151,4 +88,123 @@ export async function seedDemo(db: TDb): Promise<boolean> {
     ]);
   });
   return true;
+}
+
+type TTx = Parameters<Parameters<TDb["transaction"]>[0]>[0];
+type TMember = NonNullable<Parameters<typeof insertTank>[2]>[number];
+
+const everyFourth = (from: number, to: number) => {
+  const out: number[] = [];
+  for (let f = Math.ceil((from + 2) / 4) * 4; f < to; f += 4) out.push(f);
+  return out;
+};
+
+/** A port and a starboard tank with the same members. */
+async function insertPair(
+  tx: TTx,
+  base: { orgId: string; vesselId: string; number: number; prefix: string; name: string; kind: Parameters<typeof insertTank>[1]["kind"]; frameFrom: number; frameTo: number; bottomAreaM2: number; atWaterline?: boolean; heatedBoundary?: string },
+  members: TMember[],
+  special: { frame: number; note: string }[] = [],
+) {
+  for (const side of ["port", "starboard"] as const) {
+    const letter = side === "port" ? "P" : "S";
+    await insertTank(
+      tx,
+      {
+        orgId: base.orgId, vesselId: base.vesselId, code: `No. ${base.number} ${base.prefix} ${letter}`,
+        name: `No. ${base.number} ${base.name}, ${side}`, side, kind: base.kind, frameFrom: base.frameFrom, frameTo: base.frameTo,
+        bottomAreaM2: base.bottomAreaM2, atWaterline: base.atWaterline ?? false,
+        heatedBoundary: base.heatedBoundary ? base.heatedBoundary.replace("{S}", letter) : null,
+        sortOrder: base.frameFrom * 2 + (side === "port" ? 0 : 1),
+      },
+      members,
+      special,
+    );
+  }
+}
+
+async function seedSkerryLanternTanks(tx: TTx, orgId: string, vesselId: string) {
+  const holds: [number, number, number][] = [
+    [1, 228, 258], [2, 196, 228], [3, 164, 196], [4, 132, 164], [5, 100, 132], [6, 54, 100],
+  ];
+  for (const [n, from, to] of holds) {
+    await insertPair(
+      tx,
+      { orgId, vesselId, number: n, prefix: "DB WBT", name: "double bottom and hopper ballast tank", kind: "double_bottom_hopper", frameFrom: from, frameTo: to, bottomAreaM2: Math.round((to - from) * 9.75) },
+      [
+        { kind: "bottom_girder", numberFrom: 1, numberTo: 3, hasCentreGirder: true, label: "Centre girder (0) and side girders 1–3" },
+        { kind: "web_frame", frames: everyFourth(from, to), label: "Solid floors" },
+        { kind: "longitudinal", platingRegion: "inner_bottom", numberFrom: 1, numberTo: 18 },
+        { kind: "longitudinal", platingRegion: "bottom_shell", numberFrom: 1, numberTo: 20 },
+        { kind: "longitudinal", platingRegion: "lower_hopper", numberFrom: 21, numberTo: 27 },
+      ],
+      n === 2 ? [{ frame: 212, note: "Deep floor with lightening holes blanked; ballast suction bell mouth aft of it" }] : [],
+    );
+    if (n >= 2 && n <= 5) {
+      await insertPair(
+        tx,
+        { orgId, vesselId, number: n, prefix: "TST", name: "top side ballast tank", kind: "top_side", frameFrom: from, frameTo: to, bottomAreaM2: Math.round((to - from) * 3) },
+        [
+          { kind: "web_frame", frames: everyFourth(from, to), label: "Transverse web rings" },
+          { kind: "longitudinal", platingRegion: "upper_hopper", numberFrom: 1, numberTo: 9 },
+          { kind: "longitudinal", platingRegion: "main_deck", numberFrom: 1, numberTo: 12 },
+          { kind: "longitudinal", platingRegion: "side_shell", numberFrom: 40, numberTo: 44 },
+        ],
+      );
+    }
+  }
+  await insertTank(
+    tx,
+    { orgId, vesselId, code: "FPT", name: "Fore peak tank", side: "centre", kind: "fore_peak", frameFrom: 262, frameTo: 280, bottomAreaM2: 44, atCollisionBulkhead: true, sortOrder: 900 },
+    [
+      { kind: "stringer_deck", numberFrom: 1, numberTo: 3, numbering: "from_top", label: "Stringer decks 1–3, from the top" },
+      { kind: "web_frame", frames: [266, 270, 274], label: "Web frames" },
+      { kind: "longitudinal", platingRegion: "side_shell", numberFrom: 1, numberTo: 14 },
+    ],
+    [{ frame: 270, note: "Chain locker aft boundary steps here" }],
+  );
+  await insertTank(
+    tx,
+    { orgId, vesselId, code: "APT", name: "Aft peak tank", side: "centre", kind: "aft_peak", frameFrom: 0, frameTo: 8, bottomAreaM2: 30, sortOrder: 0 },
+    [{ kind: "stringer_deck", numberFrom: 1, numberTo: 2, numbering: "from_top", label: "Stringer decks 1–2, from the top" }],
+    [{ frame: 4, note: "Stern tube bulkhead recess" }],
+  );
+}
+
+async function seedBriskHalcyonTanks(tx: TTx, orgId: string, vesselId: string) {
+  const tanks: [number, number, number][] = [
+    [1, 185, 210], [2, 160, 185], [3, 135, 160], [4, 110, 135], [5, 85, 110], [6, 60, 85], [7, 42, 60],
+  ];
+  for (const [n, from, to] of tanks) {
+    await insertPair(
+      tx,
+      {
+        orgId, vesselId, number: n, prefix: "WBT", name: "ballast tank (double bottom and side)", kind: "double_bottom_side",
+        frameFrom: from, frameTo: to, bottomAreaM2: Math.round((to - from) * 8.4), atWaterline: true,
+        heatedBoundary: n >= 2 && n <= 6 ? `Inner side to No. ${n} cargo tank {S} (heated cargo)` : undefined,
+      },
+      [
+        { kind: "stringer_deck", numberFrom: 1, numberTo: 3, numbering: "from_top", label: "Side stringers 1–3, from the top" },
+        { kind: "bottom_girder", numberFrom: 1, numberTo: 2, hasCentreGirder: false },
+        { kind: "web_frame", frames: everyFourth(from, to), label: "Web frames" },
+        { kind: "longitudinal", platingRegion: "side_shell", numberFrom: 20, numberTo: 38 },
+        { kind: "longitudinal", platingRegion: "longitudinal_bulkhead", numberFrom: 1, numberTo: 16 },
+        { kind: "longitudinal", platingRegion: "bottom_shell", numberFrom: 1, numberTo: 14 },
+        { kind: "longitudinal", platingRegion: "inner_bottom", numberFrom: 1, numberTo: 12 },
+      ],
+    );
+  }
+  await insertTank(
+    tx,
+    { orgId, vesselId, code: "FPT", name: "Fore peak tank", side: "centre", kind: "fore_peak", frameFrom: 215, frameTo: 230, bottomAreaM2: 38, atCollisionBulkhead: true, sortOrder: 900 },
+    [
+      { kind: "stringer_deck", numberFrom: 1, numberTo: 2, numbering: "from_top" },
+      { kind: "web_frame", frames: [219, 223, 227] },
+    ],
+  );
+  await insertTank(
+    tx,
+    { orgId, vesselId, code: "APT", name: "Aft peak tank", side: "centre", kind: "aft_peak", frameFrom: 0, frameTo: 6, bottomAreaM2: 24, sortOrder: 0 },
+    [{ kind: "stringer_deck", numberFrom: 1, numberTo: 2, numbering: "from_top" }],
+  );
 }

@@ -1,5 +1,5 @@
 import "server-only";
-import type { z } from "zod";
+import { z } from "zod";
 import { requireActor, type TActor } from "@/lib/auth/actor";
 import { AppError, issuesFromZod } from "@/lib/errors";
 import { toAppError } from "./route";
@@ -43,4 +43,12 @@ export async function runFormAction<S extends z.ZodType>(
     for (const i of e.issues) fieldErrors[i.path] ??= i.message;
     return { status: "error", message: e.message, fieldErrors, values };
   }
+}
+
+/** Like runFormAction, for services that authorize first and then validate the raw form themselves. */
+export async function runServiceAction(
+  form: FormData,
+  fn: (raw: Record<string, FormDataEntryValue>, actor: TActor) => Promise<string>,
+): Promise<TActionState> {
+  return runFormAction(form, z.record(z.string(), z.any()), (raw, actor) => fn(raw as Record<string, FormDataEntryValue>, actor));
 }

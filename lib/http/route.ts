@@ -47,24 +47,32 @@ export function route<P extends TParams = Record<string, never>>(handler: THandl
 
 const MAX_JSON_BYTES = 1024 * 1024;
 
-/** Reads and validates a JSON body: malformed JSON and wrong types give 400 naming the field. */
-export async function readJson<S extends z.ZodType>(req: Request, schema: S): Promise<z.infer<S>> {
+/** Reads a JSON body without judging its shape (the service validates after it authorizes). */
+export async function readJsonValue(req: Request): Promise<unknown> {
   const length = Number(req.headers.get("content-length") ?? 0);
   if (length > MAX_JSON_BYTES) throw new AppError("payload_too_large", "The request body is larger than 1 MB.");
   const text = await req.text();
   if (text.length > MAX_JSON_BYTES) throw new AppError("payload_too_large", "The request body is larger than 1 MB.");
-  let body: unknown;
   try {
-    body = JSON.parse(text);
+    return JSON.parse(text);
   } catch {
     throw new AppError("bad_request", "The request body is not valid JSON.");
   }
-  const parsed = schema.safeParse(body);
+}
+
+/** Checks a value against a schema: wrong types give 400 naming each field. */
+export function validateInput<S extends z.ZodType>(schema: S, value: unknown): z.infer<S> {
+  const parsed = schema.safeParse(value);
   if (!parsed.success) {
     const issues = issuesFromZod(parsed.error.issues);
     throw new AppError("bad_request", `Check ${issues.map((i) => i.path).join(", ")}: ${issues[0]?.message ?? ""}`, issues);
   }
   return parsed.data;
+}
+
+/** Reads and validates a JSON body: malformed JSON and wrong types give 400 naming the field. */
+export async function readJson<S extends z.ZodType>(req: Request, schema: S): Promise<z.infer<S>> {
+  return validateInput(schema, await readJsonValue(req));
 }
 
 export function created(body: unknown) {

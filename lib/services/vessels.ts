@@ -1,13 +1,16 @@
 import "server-only";
 // What the API and the admin pages do with vessels, behind the one authorization module.
+import { listTanks } from "@/db/queries/tanks";
 import { createVessel, listVessels, updateVessel } from "@/db/queries/vessels";
+import { AppError } from "@/lib/errors";
 import { authorizeOrg, authorizeVessel } from "@/lib/auth/authorize";
 import type { TActor } from "@/lib/auth/actor";
 import { visibleVesselScope } from "@/lib/auth/roles";
 import type { TVesselInput } from "@/lib/schemas/vessel";
 
 export const VESSEL_READERS = ["officer", "master", "superintendent", "admin"] as const;
-export const VESSEL_EDITORS = ["superintendent", "admin"] as const;
+/** Who keeps a vessel's particulars: its officers and master, and the office. */
+export const VESSEL_EDITORS = ["officer", "master", "superintendent", "admin"] as const;
 
 /** Every vessel the actor may open, across the companies they hold roles in. */
 export async function listVisibleVessels(actor: TActor) {
@@ -25,5 +28,11 @@ export async function createVesselAs(actor: TActor, input: TVesselInput) {
 
 export async function updateVesselAs(actor: TActor, vesselId: string, input: TVesselInput) {
   const { orgId } = await authorizeVessel({ actor, vesselId, allow: VESSEL_EDITORS });
+  const outside = (await listTanks({ orgId, vesselId })).filter((t) => t.frameFrom < input.frameFirst || t.frameTo > input.frameLast);
+  if (outside.length) {
+    throw new AppError("conflict", `The new frames would leave ${outside.map((t) => t.code).join(", ")} outside the vessel; change those tanks first.`, [
+      { path: "frameLast", message: "would leave tanks outside the vessel's frames" },
+    ]);
+  }
   return updateVessel({ orgId, vesselId, actorUserId: actor.userId, input });
 }

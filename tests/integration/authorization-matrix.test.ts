@@ -14,6 +14,8 @@ type TCase = {
   method?: string;
   path: (s: TScenario, scope: TScope) => string;
   body?: (s: TScenario, scope: TScope) => unknown;
+  /** A body sent as it is (CSV) instead of JSON. */
+  rawBody?: string;
   /** Scopes that matter for this route; routes without a record take only "own". */
   scopes: TScope[];
   expect: (who: TWho, scope: TScope) => number;
@@ -22,6 +24,10 @@ type TCase = {
 const ROLES: TRole[] = ["officer", "master", "superintendent", "admin", "surveyor"];
 const vesselOf = (s: TScenario, scope: TScope) =>
   scope === "own" ? s.ownVessel : scope === "sibling" ? s.siblingVessel : s.otherVessel;
+const tankPath = (s: TScenario, scope: TScope) => `/api/v1/vessels/${vesselOf(s, scope).id}/tanks/${s.tankOf(vesselOf(s, scope).id).id}`;
+const tankPage = (s: TScenario, scope: TScope) => `/vessels/${vesselOf(s, scope).id}/tanks/${s.tankOf(vesselOf(s, scope).id).id}`;
+let memberSerial = 0;
+let frameSerial = 0;
 
 /** Read a vessel record: its own officer/master, or the office of its company. */
 const vesselReader = (who: TWho, scope: TScope) => {
@@ -30,12 +36,8 @@ const vesselReader = (who: TWho, scope: TScope) => {
   if (who === "officer" || who === "master") return scope === "own" ? 200 : 404;
   return 200;
 };
-/** Edit a vessel's particulars: the office; a ship's officer/master sees the record but may not edit it. */
-const vesselEditor = (who: TWho, scope: TScope) => {
-  const read = vesselReader(who, scope);
-  if (read !== 200) return read;
-  return who === "officer" || who === "master" ? 403 : 200;
-};
+/** Edit a vessel's particulars or structure map: whoever may read it (its officer and master, the office). */
+const vesselEditor = vesselReader;
 const adminOnly = (ok: number) => (who: TWho) => (who === "anonymous" ? 401 : who === "admin" ? ok : 403);
 const adminOnlyScoped = (ok: number) => (who: TWho, scope: TScope) =>
   who === "anonymous" ? 401 : who !== "admin" ? 403 : scope === "other" ? 404 : ok;
@@ -63,6 +65,39 @@ const CASES: TCase[] = [
     body: vesselBody, scopes: ["own", "sibling", "other"], expect: vesselEditor,
   },
   { name: "GET /api/v1/vessels/:id/tanks", path: (s, sc) => `/api/v1/vessels/${vesselOf(s, sc).id}/tanks`, scopes: ["own", "sibling", "other"], expect: vesselReader },
+  {
+    name: "POST /api/v1/vessels/:id/tanks", method: "POST", path: (s, sc) => `/api/v1/vessels/${vesselOf(s, sc).id}/tanks`,
+    body: () => ({ code: `M-${Math.random().toString(36).slice(2, 8)}`, name: "Matrix tank", side: "centre", kind: "double_bottom", frameFrom: 10, frameTo: 20 }),
+    scopes: ["own", "sibling", "other"], expect: (w, sc) => (vesselEditor(w, sc) === 200 ? 201 : vesselEditor(w, sc)),
+  },
+  { name: "GET /api/v1/vessels/:id/tanks/:tankId", path: (s, sc) => tankPath(s, sc), scopes: ["own", "sibling", "other"], expect: vesselReader },
+  {
+    name: "PATCH /api/v1/vessels/:id/tanks/:tankId", method: "PATCH", path: (s, sc) => tankPath(s, sc),
+    body: () => ({ code: "No. 1 WBT P", name: "Test tank", side: "port", kind: "double_bottom", frameFrom: 80, frameTo: 100 }),
+    scopes: ["own", "sibling", "other"], expect: vesselEditor,
+  },
+  {
+    name: "POST /api/v1/vessels/:id/tanks/:tankId/members", method: "POST", path: (s, sc) => `${tankPath(s, sc)}/members`,
+    body: () => ({ kind: "longitudinal", platingRegion: "bottom_shell", numberFrom: ++memberSerial * 10, numberTo: memberSerial * 10 + 5 }),
+    scopes: ["own", "sibling", "other"], expect: (w, sc) => (vesselEditor(w, sc) === 200 ? 201 : vesselEditor(w, sc)),
+  },
+  {
+    name: "POST /api/v1/vessels/:id/tanks/:tankId/special-frames", method: "POST", path: (s, sc) => `${tankPath(s, sc)}/special-frames`,
+    body: () => ({ frame: 80 + (++frameSerial % 20), note: "Matrix landmark" }),
+    scopes: ["own", "sibling", "other"], expect: (w, sc) => (vesselEditor(w, sc) === 200 ? 201 : vesselEditor(w, sc)),
+  },
+  { name: "GET /api/v1/vessels/:id/tanks/:tankId/brief.pdf", path: (s, sc) => `${tankPath(s, sc)}/brief.pdf`, scopes: ["own", "sibling", "other"], expect: vesselReader },
+  {
+    name: "POST /api/v1/vessels/:id/tanks/import (preview)", method: "POST", path: (s, sc) => `/api/v1/vessels/${vesselOf(s, sc).id}/tanks/import`,
+    rawBody: "code,name,side,kind,frame_from,frame_to\nX1,Preview only,port,side,10,20\n",
+    scopes: ["own", "sibling", "other"], expect: vesselEditor,
+  },
+  { name: "page /vessels/:id/edit", path: (s, sc) => `/vessels/${vesselOf(s, sc).id}/edit`, scopes: ["own", "sibling", "other"], expect: (w, sc) => (w === "anonymous" ? 307 : vesselEditor(w, sc)) },
+  { name: "page /vessels/:id/tanks/new", path: (s, sc) => `/vessels/${vesselOf(s, sc).id}/tanks/new`, scopes: ["own", "sibling", "other"], expect: (w, sc) => (w === "anonymous" ? 307 : vesselEditor(w, sc)) },
+  { name: "page /vessels/:id/tanks/import", path: (s, sc) => `/vessels/${vesselOf(s, sc).id}/tanks/import`, scopes: ["own", "sibling", "other"], expect: (w, sc) => (w === "anonymous" ? 307 : vesselEditor(w, sc)) },
+  { name: "page /vessels/:id/tanks/:tankId", path: (s, sc) => tankPage(s, sc), scopes: ["own", "sibling", "other"], expect: (w, sc) => (w === "anonymous" ? 307 : vesselReader(w, sc)) },
+  { name: "page /vessels/:id/tanks/:tankId/edit", path: (s, sc) => `${tankPage(s, sc)}/edit`, scopes: ["own", "sibling", "other"], expect: (w, sc) => (w === "anonymous" ? 307 : vesselEditor(w, sc)) },
+  { name: "page /vessels/:id/tanks/:tankId/brief", path: (s, sc) => `${tankPage(s, sc)}/brief`, scopes: ["own", "sibling", "other"], expect: (w, sc) => (w === "anonymous" ? 307 : vesselReader(w, sc)) },
   { name: "GET /api/v1/users", path: () => "/api/v1/users", scopes: ["own"], expect: adminOnly(200) },
   {
     name: "POST /api/v1/users", method: "POST", path: () => "/api/v1/users", scopes: ["own"],
@@ -90,7 +125,7 @@ const CASES: TCase[] = [
   { name: "page /admin/vessels/new", path: () => "/admin/vessels/new", scopes: ["own"], expect: page((w) => w === "admin") },
   {
     name: "page /admin/vessels/:id", path: (s, sc) => `/admin/vessels/${vesselOf(s, sc).id}`, scopes: ["own", "sibling", "other"],
-    expect: (w, sc) => (w === "anonymous" ? 307 : vesselEditor(w, sc) === 200 ? 200 : 404),
+    expect: (w, sc) => (w === "anonymous" ? 307 : w === "admin" && sc !== "other" ? 200 : 404),
   },
 ];
 
@@ -113,7 +148,7 @@ describe("authorization matrix", () => {
         it(`${c.name} · ${who} · ${scope} vessel`, async () => {
           const res = await clients.get(who)!.request(c.path(scenario, scope), {
             method: c.method ?? "GET",
-            json: c.body?.(scenario, scope),
+            ...(c.rawBody ? { body: c.rawBody, headers: { "content-type": "text/csv" } } : { json: c.body?.(scenario, scope) }),
           });
           expect(res.status, `${c.name} as ${who} on ${scope}`).toBe(expected());
           if (res.status === 404 && c.name.startsWith("GET /api")) {

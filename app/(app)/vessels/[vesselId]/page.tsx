@@ -1,30 +1,42 @@
 import type { Metadata } from "next";
-import { TankTable } from "@/components/vessels/tank-table";
+import Link from "next/link";
+import { TankList } from "@/components/structure-map/tank-list";
 import { VesselParticulars } from "@/components/vessels/vessel-particulars";
+import { Notice } from "@/components/ui/notice";
 import { PageHeader } from "@/components/ui/page-header";
-import { listTanks } from "@/db/queries/tanks";
-import { authorizeVessel } from "@/lib/auth/authorize";
 import { pageActor, pageAuthorize } from "@/lib/auth/page";
-import { VESSEL_READERS } from "@/lib/services/vessels";
+import { canEditStructure, readVesselTanks } from "@/lib/services/tanks";
 import { VESSEL_TYPE_LABELS } from "@/lib/vocabulary";
 
 export const metadata: Metadata = { title: "Vessel" };
 
+const linkButton = "rounded-md border border-slate-300 bg-white px-3 py-2 text-sm font-semibold text-slate-800 hover:bg-slate-50";
+
 export default async function VesselPage({ params }: { params: Promise<{ vesselId: string }> }) {
   const { vesselId } = await params;
   const actor = await pageActor();
-  const { vessel, orgId } = await pageAuthorize(() => authorizeVessel({ actor, vesselId, allow: VESSEL_READERS }));
-  const tanks = await listTanks({ orgId, vesselId });
+  const { vessel, tanks, roles } = await pageAuthorize(() => readVesselTanks(actor, vesselId));
+  const canEdit = canEditStructure(roles);
   return (
     <>
-      <PageHeader title={vessel.name} subtitle={`IMO ${vessel.imoNumber} · ${VESSEL_TYPE_LABELS[vessel.vesselType]}`} />
+      <PageHeader
+        title={vessel.name}
+        subtitle={`IMO ${vessel.imoNumber} · ${VESSEL_TYPE_LABELS[vessel.vesselType]}`}
+        actions={
+          canEdit ? (
+            <>
+              <Link href={`/vessels/${vesselId}/edit`} className={linkButton}>Edit particulars</Link>
+              <Link href={`/vessels/${vesselId}/tanks/import`} className={linkButton}>Import tanks (CSV)</Link>
+              <Link href={`/vessels/${vesselId}/tanks/new`} className="rounded-md bg-hull-700 px-3 py-2 text-sm font-semibold text-white hover:bg-hull-800">New tank</Link>
+            </>
+          ) : null
+        }
+      />
       <div className="grid gap-6 lg:grid-cols-[1fr_2fr]">
         <VesselParticulars vessel={vessel} />
         <section aria-labelledby="tanks-heading">
-          <h2 id="tanks-heading" className="mb-2 text-lg font-semibold text-hull-900">
-            Ballast tanks ({tanks.length})
-          </h2>
-          <TankTable tanks={tanks} />
+          <h2 id="tanks-heading" className="mb-2 text-lg font-semibold text-hull-900">Structure map: ballast tanks ({tanks.length})</h2>
+          {tanks.length ? <TankList vesselId={vesselId} tanks={tanks} /> : <Notice>No tanks on this vessel&apos;s structure map yet.</Notice>}
         </section>
       </div>
     </>

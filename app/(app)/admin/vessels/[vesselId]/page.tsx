@@ -3,7 +3,6 @@ import { VesselForm } from "@/components/admin/vessel-form";
 import { PageHeader } from "@/components/ui/page-header";
 import { authorizeVessel } from "@/lib/auth/authorize";
 import { pageActor, pageAuthorize } from "@/lib/auth/page";
-import { VESSEL_EDITORS } from "@/lib/services/vessels";
 import { updateVesselAction } from "../../actions";
 
 export const metadata: Metadata = { title: "Edit vessel" };
@@ -11,7 +10,7 @@ export const metadata: Metadata = { title: "Edit vessel" };
 export default async function EditVesselPage({ params }: { params: Promise<{ vesselId: string }> }) {
   const { vesselId } = await params;
   const actor = await pageActor();
-  const { vessel } = await pageAuthorize(() => authorizeVessel({ actor, vesselId, allow: VESSEL_EDITORS }));
+  const { vessel } = await pageAuthorize(() => authorizeVessel({ actor, vesselId, allow: ["admin"] }));
   const { createdAt: _c, updatedAt: _u, orgId: _o, ...values } = vessel;
   return (
     <>

@@ -1,9 +1,15 @@
-import { listTanks } from "@/db/queries/tanks";
-import { authorizeVessel } from "@/lib/auth/authorize";
-import { route } from "@/lib/http/route";
-import { VESSEL_READERS } from "@/lib/services/vessels";
+import { requireActor } from "@/lib/auth/actor";
+import { created, readJsonValue, route } from "@/lib/http/route";
+import { createTankAs, readVesselTanks } from "@/lib/services/tanks";
 
-export const GET = route<{ vesselId: string }>(async (_req, { vesselId }) => {
-  const { orgId } = await authorizeVessel({ vesselId, allow: VESSEL_READERS });
-  return { tanks: await listTanks({ orgId, vesselId }) };
+type P = { vesselId: string };
+
+export const GET = route<P>(async (_req, { vesselId }) => {
+  const { tanks } = await readVesselTanks(await requireActor(), vesselId);
+  return { tanks };
+});
+
+export const POST = route<P>(async (req, { vesselId }) => {
+  const actor = await requireActor();
+  return created({ tank: await createTankAs(actor, vesselId, await readJsonValue(req)) });
 });

@@ -1,0 +1,8 @@
+import "server-only";
+import { eq } from "drizzle-orm";
+import { db } from "@/db";
+import { organisations } from "@/db/schema";
+
+export async function getOrganisation({ orgId }: { orgId: string }) {
+  return db().query.organisations.findFirst({ where: eq(organisations.id, orgId) });
+}
