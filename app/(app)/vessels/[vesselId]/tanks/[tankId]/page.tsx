@@ -42,7 +42,9 @@ export default async function TankPage({ params }: { params: Promise<{ vesselId:
       <div className="space-y-6">
         <section aria-label="Diagrams" className="grid gap-4 rounded-lg border border-slate-200 bg-white p-4 lg:grid-cols-[2fr_1fr]">
           <TankDiagramSvg diagram={profile} />
-          <TankDiagramSvg diagram={section} />
+          <div className="mx-auto w-full max-w-xs">
+            <TankDiagramSvg diagram={section} />
+          </div>
         </section>
         <section aria-labelledby="position" className="rounded-lg border border-slate-200 bg-white p-4">
           <h2 id="position" className="mb-2 text-lg font-semibold text-hull-900">Position along the ship</h2>
