@@ -16,6 +16,7 @@ import {
   numeric,
   pgEnum,
   pgTable,
+  primaryKey,
   text,
   timestamp,
   unique,
@@ -397,6 +398,10 @@ export const inspections = pgTable(
     remarks: jsonb("remarks"),
     /** Optimistic concurrency: every write must name the version it read. */
     version: integer("version").notNull().default(1),
+    /** Explicit statements that a step has nothing to record, so an empty step is not a forgotten one. */
+    noFindings: boolean("no_findings").notNull().default(false),
+    noSediment: boolean("no_sediment").notNull().default(false),
+    allAreasInspected: boolean("all_areas_inspected").notNull().default(false),
     createdBy: uuid("created_by").references(() => users.id, { onDelete: "set null" }),
     submittedAt: timestamp("submitted_at", { withTimezone: true }),
     countersignedAt: timestamp("countersigned_at", { withTimezone: true }),
@@ -770,6 +775,21 @@ export const dockingItems = pgTable(
     createdAt: createdAt(),
   },
   (t) => [index("docking_items_docking_idx").on(t.orgId, t.dockingId)],
+);
+
+/** Responses of writes that carried an Idempotency-Key, so that a retried request is answered, not repeated. */
+export const idempotencyKeys = pgTable(
+  "idempotency_keys",
+  {
+    userId: uuid("user_id").notNull().references(() => users.id, { onDelete: "cascade" }),
+    key: text("key").notNull(),
+    orgId: uuid("org_id").notNull().references(() => organisations.id, { onDelete: "cascade" }),
+    requestHash: text("request_hash").notNull(),
+    status: integer("status").notNull(),
+    body: jsonb("body").notNull(),
+    createdAt: createdAt(),
+  },
+  (t) => [primaryKey({ columns: [t.userId, t.key] }), index("idempotency_keys_created_idx").on(t.createdAt)],
 );
 
 // ---------------------------------------------------------------- audit

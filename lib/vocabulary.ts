@@ -202,3 +202,43 @@ export const FINDING_TYPE_LABELS: Record<TFindingType, string> = {
   loose_fitting: "Loose or missing fitting",
   other: "Other",
 };
+
+export type TRepairKind = (typeof REPAIR_KINDS)[number];
+export const REPAIR_KIND_LABELS: Record<TRepairKind, string> = {
+  insert_plate: "Insert plate",
+  bracket_renewal: "Bracket renewal",
+  profile_renewal: "Profile (longitudinal / stiffener) renewal",
+  fairing: "Fairing",
+  coating_touch_up: "Coating touch-up",
+  monitor_only: "Monitor only",
+};
+export type TCoatingArea = (typeof COATING_AREAS)[number];
+export const COATING_AREA_LABELS: Record<TCoatingArea, string> = {
+  shell_plating: "Shell plating",
+  bulkhead_plating: "Bulkhead plating",
+  inner_bottom_deck_plating: "Inner bottom / deck plating",
+  stringers: "Stringers",
+  girders_web_frames: "Girders and web frames",
+  longitudinals_brackets: "Longitudinals and brackets",
+  edges_welds: "Edges and welds",
+  piping_fittings: "Piping and fittings",
+};
+export type TNotInspectedReason = (typeof NOT_INSPECTED_REASONS)[number];
+export const NOT_INSPECTED_REASON_LABELS: Record<TNotInspectedReason, string> = {
+  no_staging: "No staging / access at height",
+  water: "Water in the tank",
+  sediment: "Covered by sediment",
+  blocked_or_closed: "Blocked or closed",
+  time: "Not enough time",
+  safety: "Safety",
+  other: "Other",
+};
+export type TPlaceKind = (typeof PLACE_KINDS)[number];
+export const PLACE_KIND_LABELS: Record<TPlaceKind, string> = { port: "In port", at_sea: "At sea", dry_dock: "In dry dock", anchorage: "At anchor" };
+export const INSPECTION_STATUS_LABELS: Record<TInspectionStatus, string> = {
+  draft: "Draft",
+  submitted: "Submitted",
+  returned: "Returned with comments",
+  countersigned: "Countersigned",
+  superseded: "Superseded",
+};

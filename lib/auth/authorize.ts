@@ -6,6 +6,7 @@ import "server-only";
 //   - a record of another vessel/company → 404, the same as a record that does not exist
 //   - own record, role not allowed       → 403
 import { z } from "zod";
+import { unsafeGetInspectionScope } from "@/db/queries/inspections";
 import { unsafeGetVesselById } from "@/db/queries/vessels";
 import { AppError } from "@/lib/errors";
 import type { TRole } from "@/lib/vocabulary";
@@ -47,4 +48,18 @@ export async function authorizeOrg({ allow, actor }: { allow: readonly TRole[]; 
 /** Any signed-in user (their own profile, the shared-report list of a surveyor). */
 export async function authorizeSignedIn() {
   return { actor: await requireActor() };
+}
+
+/** An inspection, through the vessel it belongs to: the same 404 / 403 rules as the vessel. */
+export async function authorizeInspection({ inspectionId, allow, actor }: { inspectionId: string; allow: readonly TRole[]; actor?: TActor }) {
+  const who = actor ?? (await requireActor());
+  if (!ZId.safeParse(inspectionId).success) throw new AppError("not_found", "No such inspection.");
+  const scope = await unsafeGetInspectionScope({ inspectionId });
+  if (!scope) throw new AppError("not_found", "No such inspection.");
+  try {
+    return { ...(await authorizeVessel({ actor: who, vesselId: scope.vesselId, allow })), inspectionId };
+  } catch (error) {
+    if (error instanceof AppError && error.code === "not_found") throw new AppError("not_found", "No such inspection.");
+    throw error;
+  }
 }

@@ -3,6 +3,7 @@
 import { revalidatePath } from "next/cache";
 import { redirect } from "next/navigation";
 import { runServiceAction, type TActionState } from "@/lib/http/action";
+import { startInspectionAs } from "@/lib/services/inspections";
 import {
   addMemberAs,
   addSpecialFrameAs,
@@ -101,4 +102,16 @@ export async function removeSpecialFrameAction(_prev: TActionState, form: FormDa
     revalidatePath(`/vessels/${vesselId}/tanks/${tankId}`);
     return "Special frame removed.";
   });
+}
+
+export async function startInspectionAction(_prev: TActionState, form: FormData): Promise<TActionState> {
+  const { vesselId } = ids(form);
+  let createdId = "";
+  const state = await runServiceAction(form, async (raw, actor) => {
+    const inspection = await startInspectionAs(actor, vesselId, raw);
+    createdId = inspection.id;
+    return "Inspection started.";
+  });
+  if (createdId) redirect(`/inspections/${createdId}?step=entry`);
+  return state;
 }

@@ -5,6 +5,8 @@ import { VesselParticulars } from "@/components/vessels/vessel-particulars";
 import { Notice } from "@/components/ui/notice";
 import { PageHeader } from "@/components/ui/page-header";
 import { pageActor, pageAuthorize } from "@/lib/auth/page";
+import { InspectionList } from "@/components/inspections/inspection-list";
+import { INSPECTORS, listInspectionsAs } from "@/lib/services/inspections";
 import { canEditStructure, readVesselTanks } from "@/lib/services/tanks";
 import { VESSEL_TYPE_LABELS } from "@/lib/vocabulary";
 
@@ -17,6 +19,8 @@ export default async function VesselPage({ params }: { params: Promise<{ vesselI
   const actor = await pageActor();
   const { vessel, tanks, roles } = await pageAuthorize(() => readVesselTanks(actor, vesselId));
   const canEdit = canEditStructure(roles);
+  const canInspect = roles.some((r) => (INSPECTORS as readonly string[]).includes(r));
+  const inspections = await listInspectionsAs(actor, vesselId);
   return (
     <>
       <PageHeader
@@ -25,6 +29,7 @@ export default async function VesselPage({ params }: { params: Promise<{ vesselI
         actions={
           canEdit ? (
             <>
+              {canInspect ? <Link href={`/vessels/${vesselId}/inspections/new`} className="rounded-md bg-hull-700 px-3 py-2 text-sm font-semibold text-white hover:bg-hull-800">Start an inspection</Link> : null}
               <Link href={`/vessels/${vesselId}/edit`} className={linkButton}>Edit particulars</Link>
               <Link href={`/vessels/${vesselId}/tanks/import`} className={linkButton}>Import tanks (CSV)</Link>
               <Link href={`/vessels/${vesselId}/tanks/new`} className="rounded-md bg-hull-700 px-3 py-2 text-sm font-semibold text-white hover:bg-hull-800">New tank</Link>
@@ -39,6 +44,10 @@ export default async function VesselPage({ params }: { params: Promise<{ vesselI
           {tanks.length ? <TankList vesselId={vesselId} tanks={tanks} /> : <Notice>No tanks on this vessel&apos;s structure map yet.</Notice>}
         </section>
       </div>
+      <section aria-labelledby="inspections-heading" className="mt-6">
+        <h2 id="inspections-heading" className="mb-2 text-lg font-semibold text-hull-900">Inspections ({inspections.length})</h2>
+        {inspections.length ? <InspectionList inspections={inspections} /> : <Notice>No inspection recorded yet.</Notice>}
+      </section>
     </>
   );
 }

@@ -34,6 +34,9 @@ export default async function TankPage({ params }: { params: Promise<{ vesselId:
         subtitle={`${tank.name} · ${TANK_SIDE_LABELS[tank.side]} · ${TANK_KIND_LABELS[tank.kind]} · ${formatFrames(tank.frameFrom, tank.frameTo)} · ${vessel.name}`}
         actions={
           <>
+            {roles.includes("officer") || roles.includes("master") ? (
+              <Link href={`/vessels/${vesselId}/inspections/new?tank=${tankId}`} className="rounded-md border border-slate-300 bg-white px-3 py-2 text-sm font-semibold">Start an inspection</Link>
+            ) : null}
             <Link href={`/vessels/${vesselId}/tanks/${tankId}/brief`} className="rounded-md bg-hull-700 px-3 py-2 text-sm font-semibold text-white hover:bg-hull-800">Pre-entry brief</Link>
             {canEdit ? <Link href={`/vessels/${vesselId}/tanks/${tankId}/edit`} className="rounded-md border border-slate-300 bg-white px-3 py-2 text-sm font-semibold">Edit tank</Link> : null}
           </>

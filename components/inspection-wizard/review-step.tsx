@@ -1,0 +1,49 @@
+"use client";
+
+import { Notice } from "@/components/ui/notice";
+import { roundKg } from "@/lib/calc/steel";
+import { formatFrames } from "@/lib/structure/frames";
+import { COATING_AREA_LABELS, FINDING_TYPE_LABELS, MEMBER_KIND_LABELS, NOT_INSPECTED_REASON_LABELS, REPAIR_KIND_LABELS } from "@/lib/vocabulary";
+import { RatingBadge } from "./rating-badge";
+import type { TView } from "./types";
+
+export function ReviewStep({ view, go }: { view: TView; go: (step: string, field?: string) => void }) {
+  const steel = view.findings.reduce((s, f) => s + (f.steelWeightKg ?? 0), 0);
+  const coatingRepair = view.findings.reduce((s, f) => s + (f.coatingRepairM2 ?? 0), 0);
+  return (
+    <div className="space-y-5">
+      {view.blockers.length ? (
+        <Notice tone="error" title={`${view.blockers.length} thing${view.blockers.length > 1 ? "s" : ""} to complete before the report can be submitted`}>
+          <ul className="list-disc pl-5">
+            {view.blockers.map((b) => (
+              <li key={b.message}>
+                <a className="underline" href={`?step=${b.step}#${b.field}`} onClick={(e) => { e.preventDefault(); go(b.step, b.field); }}>{b.message}</a>
+              </li>
+            ))}
+          </ul>
+        </Notice>
+      ) : (
+        <Notice tone="success" title="Ready to submit">Every step is complete. Submission and countersigning follow.</Notice>
+      )}
+      <section className="grid gap-3 rounded-lg border border-slate-200 bg-white p-4 sm:grid-cols-2">
+        <p>Coating: {view.tankRating ? <><RatingBadge rating={view.tankRating.rating} /> — worst area {COATING_AREA_LABELS[view.tankRating.worstArea as keyof typeof COATING_AREA_LABELS]}: {view.tankRating.decidedBy}</> : "not rated yet"}</p>
+        <p>Findings: {view.findings.length} · steel {roundKg(steel)} kg ({(steel / 1000).toFixed(3)} t) · coating repair {coatingRepair.toFixed(2)} m²</p>
+        <p>Anodes: {view.anodes ? `${view.anodes.meanWastagePct} % mean wastage, ${view.anodes.toRenewCount} to renew` : "not recorded"}</p>
+        <p>Sediment: {view.sediment.totalM3.toFixed(2)} m³{view.sediment.cost ? ` · about ${view.sediment.cost.amount.toLocaleString("en")} ${view.sediment.cost.currency} to remove` : ""}</p>
+        <p>Not inspected: {view.notInspected.length ? view.notInspected.map((a) => `${formatFrames(a.frameFrom, a.frameTo)} (${NOT_INSPECTED_REASON_LABELS[a.reason]})`).join("; ") : view.inspection.allAreasInspected ? "every area inspected" : "not stated"}</p>
+      </section>
+      {view.findings.length ? (
+        <section className="rounded-lg border border-slate-200 bg-white p-4">
+          <h3 className="mb-2 font-semibold text-hull-900">Findings</h3>
+          <ol className="space-y-1 text-sm">
+            {view.findings.map((f) => (
+              <li key={f.id}>
+                <span className="font-semibold">#{f.number} {FINDING_TYPE_LABELS[f.type]}</span> · {formatFrames(f.frameFrom, f.frameTo)} · {MEMBER_KIND_LABELS[f.memberKind]}{f.memberNumber !== null ? ` ${f.memberNumber}` : ""} — {f.description} · {REPAIR_KIND_LABELS[f.repairKind]}{f.steelWeightKg ? ` · ${roundKg(f.steelWeightKg)} kg` : ""}
+              </li>
+            ))}
+          </ol>
+        </section>
+      ) : null}
+    </div>
+  );
+}
