@@ -26,6 +26,13 @@ const vesselOf = (s: TScenario, scope: TScope) =>
   scope === "own" ? s.ownVessel : scope === "sibling" ? s.siblingVessel : s.otherVessel;
 const tankPath = (s: TScenario, scope: TScope) => `/api/v1/vessels/${vesselOf(s, scope).id}/tanks/${s.tankOf(vesselOf(s, scope).id).id}`;
 const tankPage = (s: TScenario, scope: TScope) => `/vessels/${vesselOf(s, scope).id}/tanks/${s.tankOf(vesselOf(s, scope).id).id}`;
+const inspectionPath = (s: TScenario, scope: TScope) => `/api/v1/inspections/${s.inspectionOf(vesselOf(s, scope).id)}`;
+/** Carry out an inspection: the vessel's officer and master; the office reads but does not write. */
+const inspector = (who: TWho, scope: TScope, ok: number) => {
+  const read = vesselReader(who, scope);
+  if (read !== 200) return read;
+  return who === "officer" || who === "master" ? ok : 403;
+};
 let memberSerial = 0;
 let frameSerial = 0;
 
@@ -98,6 +105,34 @@ const CASES: TCase[] = [
   { name: "page /vessels/:id/tanks/:tankId", path: (s, sc) => tankPage(s, sc), scopes: ["own", "sibling", "other"], expect: (w, sc) => (w === "anonymous" ? 307 : vesselReader(w, sc)) },
   { name: "page /vessels/:id/tanks/:tankId/edit", path: (s, sc) => `${tankPage(s, sc)}/edit`, scopes: ["own", "sibling", "other"], expect: (w, sc) => (w === "anonymous" ? 307 : vesselEditor(w, sc)) },
   { name: "page /vessels/:id/tanks/:tankId/brief", path: (s, sc) => `${tankPage(s, sc)}/brief`, scopes: ["own", "sibling", "other"], expect: (w, sc) => (w === "anonymous" ? 307 : vesselReader(w, sc)) },
+  { name: "GET /api/v1/vessels/:id/inspections", path: (s, sc) => `/api/v1/vessels/${vesselOf(s, sc).id}/inspections`, scopes: ["own", "sibling", "other"], expect: vesselReader },
+  {
+    name: "POST /api/v1/vessels/:id/inspections", method: "POST", path: (s, sc) => `/api/v1/vessels/${vesselOf(s, sc).id}/inspections`,
+    body: (s, sc) => ({ tankId: s.tankOf(vesselOf(s, sc).id).id, inspectedOn: "2026-11-21", placeKind: "at_sea", place: "At sea, matrix", team: ["Matrix team"] }),
+    scopes: ["own", "sibling", "other"], expect: (w, sc) => inspector(w, sc, 201),
+  },
+  { name: "GET /api/v1/inspections/:id", path: (s, sc) => inspectionPath(s, sc), scopes: ["own", "sibling", "other"], expect: vesselReader },
+  {
+    name: "PUT /api/v1/inspections/:id/sections/remarks", method: "PUT", path: (s, sc) => `${inspectionPath(s, sc)}/sections/remarks`,
+    body: () => ({ version: 1, doc: { type: "doc", content: [] } }),
+    // Version 1 is current only for the first accepted write; later accepted roles meet the moved version (409).
+    scopes: ["own", "sibling", "other"], expect: (w, sc) => inspector(w, sc, w === "officer" ? 200 : 409),
+  },
+  {
+    name: "POST /api/v1/inspections/:id/readings", method: "POST", path: (s, sc) => `${inspectionPath(s, sc)}/readings`,
+    body: () => ({ version: 1, id: crypto.randomUUID(), testedAt: "2026-11-20T08:00:00Z", oxygenPct: 20.9, flammableLflPct: 0, h2sPpm: 0, coPpm: 0, measuredBy: "Matrix" }),
+    scopes: ["own", "sibling", "other"], expect: (w, sc) => inspector(w, sc, 409),
+  },
+  {
+    name: "PUT /api/v1/inspections/:id/findings/:findingId", method: "PUT", path: (s, sc) => `${inspectionPath(s, sc)}/findings/${crypto.randomUUID()}`,
+    body: () => ({ version: 1, type: "other", frameFrom: 85, frameTo: 85, memberKind: "manhole", description: "Manhole cover bolt missing, 1 of 24", repair: { kind: "monitor_only" } }),
+    scopes: ["own", "sibling", "other"], expect: (w, sc) => inspector(w, sc, 409),
+  },
+  { name: "page /inspections/:id", path: (s, sc) => `/inspections/${s.inspectionOf(vesselOf(s, sc).id)}`, scopes: ["own", "sibling", "other"], expect: (w, sc) => (w === "anonymous" ? 307 : vesselReader(w, sc)) },
+  {
+    name: "page /vessels/:id/inspections/new", path: (s, sc) => `/vessels/${vesselOf(s, sc).id}/inspections/new`, scopes: ["own", "sibling", "other"],
+    expect: (w, sc) => (w === "anonymous" ? 307 : inspector(w, sc, 200) === 403 ? 404 : inspector(w, sc, 200)),
+  },
   { name: "GET /api/v1/users", path: () => "/api/v1/users", scopes: ["own"], expect: adminOnly(200) },
   {
     name: "POST /api/v1/users", method: "POST", path: () => "/api/v1/users", scopes: ["own"],
