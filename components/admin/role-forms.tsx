@@ -14,7 +14,7 @@ export function GrantRoleForm({ action, userId, vessels }: { action: TAction; us
     <form action={formAction} className="space-y-2" noValidate>
       <FormStatus state={state} />
       <input type="hidden" name="userId" value={userId} />
-      <div className="grid gap-2 sm:grid-cols-[1fr_1fr_auto] sm:items-end">
+      <div key={state.status === "error" ? JSON.stringify(state.values) : state.status} className="grid gap-2 sm:grid-cols-[1fr_1fr_auto] sm:items-end">
         <RoleFields state={state} vessels={vessels} compact />
         <Button type="submit" variant="secondary" disabled={pending}>
           Grant role

@@ -48,7 +48,7 @@ export function AddMemberForm({ action, tank }: { action: TAction; tank: TTank }
           <SelectField label="Numbered" name="numbering" defaultValue={f.value("numbering") || "from_top"} error={f.error("numbering")} options={[{ value: "from_top", label: "from the top" }, { value: "from_bottom", label: "from the bottom" }]} />
         ) : null}
         {kind === "bottom_girder" ? (
-          <SelectField label="Centre girder in this tank" name="hasCentreGirder" defaultValue="false" options={[{ value: "false", label: "No" }, { value: "true", label: "Yes (number 0)" }]} />
+          <SelectField label="Centre girder in this tank" name="hasCentreGirder" defaultValue={f.value("hasCentreGirder") || "false"} options={[{ value: "false", label: "No" }, { value: "true", label: "Yes (number 0)" }]} />
         ) : null}
         <TextField label="Label (optional)" name="label" error={f.error("label")} defaultValue={f.value("label")} />
       </div>

@@ -21,7 +21,7 @@ import { authorizeVessel } from "@/lib/auth/authorize";
 import { AppError, databaseErrorCode } from "@/lib/errors";
 import { validateInput } from "@/lib/http/route";
 import { memberInputSchema, specialFrameInputSchema, tankInputSchema, type TTankInput } from "@/lib/schemas/tank";
-import { memberConflict } from "@/lib/structure/catalogue";
+import { memberConflict, memberMisfit } from "@/lib/structure/catalogue";
 import { mirrorTankInput } from "@/lib/structure/mirror";
 import { parseTankCsv, type TCsvPreview } from "@/lib/structure/tank-csv";
 import { VESSEL_READERS } from "./vessels";
@@ -96,6 +96,8 @@ export async function deleteTankAs(actor: TActor, vesselId: string, tankId: stri
 export async function addMemberAs(actor: TActor, vesselId: string, tankId: string, body: unknown) {
   const { orgId, tank, catalogue } = await editableTank(actor, vesselId, tankId);
   const input = validate(memberInputSchema(tank), body);
+  const misfit = memberMisfit(tank.kind, input);
+  if (misfit) throw new AppError("unprocessable", misfit.message, [{ path: misfit.path, message: misfit.message }]);
   const clash = memberConflict(catalogue.members, {
     kind: input.kind, platingRegion: input.platingRegion ?? null, numberFrom: input.numberFrom ?? null, numberTo: input.numberTo ?? null,
     numbering: input.numbering ?? null, frames: input.frames ?? null, hasCentreGirder: input.hasCentreGirder ?? null,

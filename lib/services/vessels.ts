@@ -2,7 +2,7 @@ import "server-only";
 // What the API and the admin pages do with vessels, behind the one authorization module.
 import { listTanks } from "@/db/queries/tanks";
 import { createVessel, listVessels, updateVessel } from "@/db/queries/vessels";
-import { AppError } from "@/lib/errors";
+import { AppError, databaseErrorCode } from "@/lib/errors";
 import { authorizeOrg, authorizeVessel } from "@/lib/auth/authorize";
 import type { TActor } from "@/lib/auth/actor";
 import { visibleVesselScope } from "@/lib/auth/roles";
@@ -21,9 +21,16 @@ export async function listVisibleVessels(actor: TActor) {
   return out;
 }
 
+const duplicateImo = (error: unknown, imo: string): never => {
+  if (databaseErrorCode(error) === "23505") {
+    throw new AppError("conflict", `IMO ${imo} is already a vessel of this company.`, [{ path: "imoNumber", message: "is already used by a vessel of this company" }]);
+  }
+  throw error;
+};
+
 export async function createVesselAs(actor: TActor, input: TVesselInput) {
   const { orgId } = await authorizeOrg({ actor, allow: ["admin"] });
-  return createVessel({ orgId, actorUserId: actor.userId, input });
+  return createVessel({ orgId, actorUserId: actor.userId, input }).catch((e) => duplicateImo(e, input.imoNumber));
 }
 
 export async function updateVesselAs(actor: TActor, vesselId: string, input: TVesselInput) {
@@ -34,5 +41,5 @@ export async function updateVesselAs(actor: TActor, vesselId: string, input: TVe
       { path: "frameLast", message: "would leave tanks outside the vessel's frames" },
     ]);
   }
-  return updateVessel({ orgId, vesselId, actorUserId: actor.userId, input });
+  return updateVessel({ orgId, vesselId, actorUserId: actor.userId, input }).catch((e) => duplicateImo(e, input.imoNumber));
 }

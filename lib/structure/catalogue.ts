@@ -1,6 +1,7 @@
 // A tank's member catalogue: the one module that answers "is this member,
 // number or frame inside this tank?" for every form and route.
-import { PLATING_REGION_LABELS, type TMemberKind, type TPlatingRegion } from "@/lib/vocabulary";
+import { regionsOfKind } from "@/lib/diagram/tank-diagram";
+import { PLATING_REGION_LABELS, TANK_KIND_LABELS, type TMemberKind, type TPlatingRegion, type TTankKind } from "@/lib/vocabulary";
 import { formatFrames, frameRangeProblem } from "./frames";
 
 export type TCatalogueMember = {
@@ -112,4 +113,23 @@ export function landmarkFrames(cat: TCatalogue): { frame: number; label: string 
   for (const m of cat.members) if (m.kind === "web_frame") for (const f of m.frames ?? []) marks.set(f, "web");
   for (const s of cat.specialFrames) marks.set(s.frame, "special");
   return [...marks].sort((a, b) => a[0] - b[0]).map(([frame, label]) => ({ frame, label: `${formatFrames(frame, frame)}${label === "special" ? " *" : ""}` }));
+}
+
+const PEAKS: readonly TTankKind[] = ["fore_peak", "aft_peak"];
+const WITH_SIDE: readonly TTankKind[] = ["side", "double_bottom_side", "hopper_side", "double_bottom_hopper_side", ...PEAKS];
+const WITH_DOUBLE_BOTTOM: readonly TTankKind[] = ["double_bottom", "double_bottom_hopper", "double_bottom_side", "double_bottom_hopper_side", ...PEAKS];
+
+/**
+ * Whether a member can belong to a tank of this kind (common practice): stringer
+ * decks stand in side tanks and peaks, bottom girders in double bottoms and
+ * peaks, longitudinals stiffen the plating regions the kind has.
+ */
+export function memberMisfit(kind: TTankKind, m: { kind: TMemberKind; platingRegion?: TPlatingRegion | null }): { path: string; message: string } | null {
+  const tankKind = TANK_KIND_LABELS[kind].toLowerCase();
+  if (m.kind === "stringer_deck" && !WITH_SIDE.includes(kind)) return { path: "kind", message: `A ${tankKind} tank has no stringer decks.` };
+  if (m.kind === "bottom_girder" && !WITH_DOUBLE_BOTTOM.includes(kind)) return { path: "kind", message: `A ${tankKind} tank has no bottom girders.` };
+  if (m.kind === "longitudinal" && m.platingRegion && !PEAKS.includes(kind) && m.platingRegion !== "transverse_bulkhead" && !regionsOfKind(kind).includes(m.platingRegion)) {
+    return { path: "platingRegion", message: `A ${tankKind} tank has no ${PLATING_REGION_LABELS[m.platingRegion].toLowerCase()} plating; its regions are ${regionsOfKind(kind).map((r) => PLATING_REGION_LABELS[r].toLowerCase()).join(", ")}.` };
+  }
+  return null;
 }

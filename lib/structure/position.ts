@@ -1,6 +1,6 @@
 // Where a tank lies along the ship, derived from the vessel's frames, with the
 // reason a person can read beside each answer.
-import { formatFrames, framesApart, spansOverlap, type TFrameSpan } from "./frames";
+import { formatFrames, framesApart, type TFrameSpan } from "./frames";
 
 export type TVesselFrames = {
   frameFirst: number;
@@ -31,12 +31,22 @@ export function forwardRegionStartFrame(v: TVesselFrames): number {
 export function deriveTankPosition(v: TVesselFrames, tank: TFrameSpan & { atCollisionBulkhead?: boolean }): TTankPosition {
   const frames = formatFrames(tank.frameFrom, tank.frameTo);
 
-  const midship: TDerived =
-    v.midshipFromFrame === null || v.midshipToFrame === null
-      ? { applies: false, why: "The vessel's particulars do not give the midship region." }
-      : spansOverlap(tank, { frameFrom: v.midshipFromFrame, frameTo: v.midshipToFrame })
-        ? { applies: true, why: `${frames} overlaps the midship region (${formatFrames(v.midshipFromFrame, v.midshipToFrame)}).` }
-        : { applies: false, why: `${frames} lies outside the midship region (${formatFrames(v.midshipFromFrame, v.midshipToFrame)}).` };
+  let midship: TDerived;
+  if (v.midshipFromFrame === null || v.midshipToFrame === null) {
+    midship = { applies: false, why: "The vessel's particulars do not give the midship region." };
+  } else {
+    const region = formatFrames(v.midshipFromFrame, v.midshipToFrame);
+    // Frames shared with the region, not counting a bulkhead frame the tank only touches.
+    const from = Math.max(tank.frameFrom, v.midshipFromFrame);
+    const to = Math.min(tank.frameTo, v.midshipToFrame);
+    if (to - from < 1) {
+      midship = { applies: false, why: `${frames} lies outside the midship region (${region})${to === from ? `, touching it only at Fr. ${from}` : ""}.` };
+    } else if (from === tank.frameFrom && to === tank.frameTo) {
+      midship = { applies: true, why: `${frames} lies within the midship region (${region}).` };
+    } else {
+      midship = { applies: true, why: `${frames} lies partly in the midship region (${region}): ${formatFrames(from, to)}.` };
+    }
+  }
 
   let nearEngineRoom: TDerived;
   if (v.engineRoomFwdBulkheadFrame === null) {

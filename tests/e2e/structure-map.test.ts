@@ -41,7 +41,7 @@ describe("structure map in Chromium (officer, tablet width)", () => {
     await page.waitForURL(/\/tanks\/[0-9a-f-]{36}$/);
     await expect(page.getByRole("heading", { level: 1 }).textContent()).resolves.toBe("No. 4 WBT P");
     // The product says why the tank is in the midship region (scenario vessel: midship Fr. 60–140).
-    await page.getByText("overlaps the midship region (Fr. 60–140)").first().waitFor();
+    await page.getByText("lies within the midship region (Fr. 60–140)").first().waitFor();
 
     const tank = new TankPage(page);
     await tank.addLongitudinals("side_shell", "20", "38", "Side shell longitudinals 20–38");

@@ -49,6 +49,7 @@ describe("bad input to route handlers", () => {
     expect((await admin.request("/api/v1/vessels", { method: "POST", json: body })).status).toBe(201);
     const again = await admin.request("/api/v1/vessels", { method: "POST", json: { ...body, name: "Twin B" } });
     expect(again.status).toBe(409);
+    expect(((await again.json()) as TBody).error.issues.map((i) => i.path)).toEqual(["imoNumber"]);
     const rows = await testDb().select().from(vessels).where(and(eq(vessels.orgId, s.org.id), eq(vessels.imoNumber, imoNumber)));
     expect(rows.map((r) => r.name)).toEqual(["Twin A"]);
   });

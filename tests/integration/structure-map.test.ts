@@ -97,6 +97,9 @@ describe("tanks and their member catalogue", () => {
     const outside = await officer.request(url, { method: "POST", json: { kind: "web_frame", frames: "146, 150" } });
     expect(outside.status).toBe(400);
     expect(((await outside.json()) as TBody).error!.issues.map((i) => i.path)).toEqual(["frames"]);
+    const misfit = await officer.request(url, { method: "POST", json: { kind: "longitudinal", platingRegion: "main_deck", numberFrom: 1, numberTo: 9 } });
+    expect(misfit.status).toBe(422);
+    expect(((await misfit.json()) as TBody).error!.issues.map((i) => i.path)).toEqual(["platingRegion"]);
     const sf = await officer.request(`${tanksUrl()}/${tankId}/special-frames`, { method: "POST", json: { frame: 160, note: "Sounding pipe striker plate here" } });
     expect(sf.status).toBe(201);
     expect(await testDb().$count(tankMembers, eq(tankMembers.tankId, tankId))).toBe(3);

@@ -2,7 +2,7 @@
 // inspection (no single published source); the thresholds are our settings.
 import { describe, expect, it } from "vitest";
 import { memberInputSchema, parseFrameList, specialFrameInputSchema, tankInputSchema } from "@/lib/schemas/tank";
-import { checkMemberReference, memberConflict, type TCatalogue, type TCatalogueMember } from "@/lib/structure/catalogue";
+import { checkMemberReference, memberConflict, memberMisfit, type TCatalogue, type TCatalogueMember } from "@/lib/structure/catalogue";
 import { areasOfConcern, CONCERN_IDS, type TConcernContext } from "@/lib/structure/concerns";
 import { frameRangeProblem, framesApart, spansOverlap } from "@/lib/structure/frames";
 import { mirrorTankCode, mirrorTankInput } from "@/lib/structure/mirror";
@@ -28,9 +28,10 @@ describe("frame ranges", () => {
 });
 
 describe("position along the ship, derived from frames", () => {
-  it("midship region: overlapping the region's frames, with the reason", () => {
-    expect(deriveTankPosition(vessel, { frameFrom: 164, frameTo: 196 }).midship).toEqual({ applies: true, why: "Fr. 164–196 overlaps the midship region (Fr. 98–196)." });
-    expect(deriveTankPosition(vessel, { frameFrom: 196, frameTo: 228 }).midship.applies).toBe(true); // touches at Fr. 196
+  it("midship region: sharing frames with the region, with the reason; touching its end frame does not count", () => {
+    expect(deriveTankPosition(vessel, { frameFrom: 164, frameTo: 196 }).midship).toEqual({ applies: true, why: "Fr. 164–196 lies within the midship region (Fr. 98–196)." });
+    expect(deriveTankPosition(vessel, { frameFrom: 196, frameTo: 228 }).midship).toEqual({ applies: false, why: "Fr. 196–228 lies outside the midship region (Fr. 98–196), touching it only at Fr. 196." });
+    expect(deriveTankPosition(vessel, { frameFrom: 54, frameTo: 100 }).midship).toEqual({ applies: true, why: "Fr. 54–100 lies partly in the midship region (Fr. 98–196): Fr. 98–100." });
     expect(deriveTankPosition(vessel, { frameFrom: 197, frameTo: 228 }).midship.applies).toBe(false);
     expect(deriveTankPosition(unknownVessel, { frameFrom: 150, frameTo: 160 }).midship.why).toMatch(/do not give the midship region/);
   });
@@ -66,7 +67,7 @@ describe("areas of concern, case by case (common practice)", () => {
     const got = areasOfConcern(ctx({ frames: [120, 140] }));
     const midship = got.find((a) => a.id === "midship-brackets")!;
     expect(midship.lookFor).toMatch(/frames either side/);
-    expect(midship.because).toMatch(/overlaps the midship region/);
+    expect(midship.because).toMatch(/lies within the midship region/);
   });
   it("next to the engine room: diagonal cracks", () => {
     expect(ids(ctx({ frames: [54, 70] }))).toContain("engine-room-diagonal-cracks");
@@ -150,6 +151,16 @@ describe("member catalogue: is this member inside this tank?", () => {
     expect(memberConflict(catalogue.members, m({ numberFrom: 39, numberTo: 40 }))).toBeNull();
     expect(memberConflict(catalogue.members, m({ platingRegion: "inner_bottom", numberFrom: 20, numberTo: 30 }))).toBeNull();
     expect(memberConflict(catalogue.members, m({ kind: "web_frame", platingRegion: null, numberFrom: null, numberTo: null, frames: [112, 116] }))).toMatch(/Fr\. 112/);
+  });
+});
+
+describe("members a tank of its kind can have (common practice)", () => {
+  it("stringer decks in side tanks and peaks, girders in double bottoms and peaks, longitudinals of the kind's plating", () => {
+    expect(memberMisfit("double_bottom_hopper", { kind: "stringer_deck" })?.message).toMatch(/has no stringer decks/);
+    expect(memberMisfit("fore_peak", { kind: "stringer_deck" })).toBeNull();
+    expect(memberMisfit("top_side", { kind: "bottom_girder" })?.path).toBe("kind");
+    expect(memberMisfit("double_bottom", { kind: "longitudinal", platingRegion: "main_deck" })?.path).toBe("platingRegion");
+    expect(memberMisfit("double_bottom", { kind: "longitudinal", platingRegion: "inner_bottom" })).toBeNull();
   });
 });
 
