@@ -46,7 +46,7 @@ export function BriefDocument({ brief, vesselName, profile, section }: { brief: 
     ["Midship region", `${brief.position.midship.applies ? "Yes" : "No"} — ${brief.position.midship.why}`],
     ["Engine room", `${brief.position.nearEngineRoom.applies ? "Next to it" : "No"} — ${brief.position.nearEngineRoom.why}`],
     ["Forward region", `${brief.position.forwardRegion.applies ? "Yes" : "No"} — ${brief.position.forwardRegion.why}`],
-    ["Collision bhd", `${brief.position.forwardOfCollisionBulkhead.applies ? "At or forward" : "Aft"} — ${brief.position.forwardOfCollisionBulkhead.why}`],
+    ["Fwd of coll. bhd", `${brief.position.forwardOfCollisionBulkhead.applies ? "Yes" : "No"} — ${brief.position.forwardOfCollisionBulkhead.why}`],
   ];
   return (
     <Document title={brief.title} author="Tankwright" subject="Pre-entry brief">
@@ -87,7 +87,7 @@ export function BriefDocument({ brief, vesselName, profile, section }: { brief: 
           <View key={c.id} style={s.concern} wrap={false}>
             <Text style={s.concernTitle}>{c.title}</Text>
             <Text>Look for: {c.lookFor}</Text>
-            <Text style={s.small}>Why: {c.why} ({c.because})</Text>
+            <Text style={s.small}>Why: {c.why} Here: {c.because}</Text>
           </View>
         ))}
 

@@ -16,7 +16,7 @@ export function TankList({ vesselId, tanks }: { vesselId: string; tanks: TTankRo
     const q = query.trim().toLowerCase();
     return tanks
       .filter((t) => (!side || t.side === side) && (!q || `${t.code} ${t.name} ${TANK_KIND_LABELS[t.kind]}`.toLowerCase().includes(q)))
-      .sort((a, b) => (sort === "frameFrom" ? a.frameFrom - b.frameFrom || a.code.localeCompare(b.code) : String(a[sort]).localeCompare(String(b[sort]))));
+      .sort((a, b) => (sort === "frameFrom" ? a.frameFrom - b.frameFrom || a.code.localeCompare(b.code) : String(a[sort]).localeCompare(String(b[sort]), "en", { numeric: true })));
   }, [tanks, query, side, sort]);
   const sortButton = (key: TSortKey, label: string) => (
     <button type="button" onClick={() => setSort(key)} aria-pressed={sort === key} className={`uppercase ${sort === key ? "text-hull-900 underline" : ""}`}>
@@ -50,7 +50,7 @@ export function TankList({ vesselId, tanks }: { vesselId: string; tanks: TTankRo
           </tr>
         ))}
       </Table>
-      <p className="text-xs text-slate-600">{rows.length} of {tanks.length} tanks shown</p>
+      <p className="text-xs text-slate-600">{rows.length ? `${rows.length} of ${tanks.length} tanks shown` : "No tank matches this filter."}</p>
     </div>
   );
 }

@@ -226,14 +226,20 @@ function drawnX(layout: TProfileLayout, frame: number): number {
   return frameToX(layout, Math.min(Math.max(frame, layout.frameFirst), layout.frameLast));
 }
 
+/** The tank code inside its box, smaller if need be; above the box when even 7-unit text will not fit. */
+function codeLabel(box: TBox, code: string): TText {
+  const room = box.x1 - box.x0 - 4;
+  let size = 10;
+  while (size > 7 && textWidth(code, size) > room) size -= 0.5;
+  if (textWidth(code, size) <= room) return label((box.x0 + box.x1) / 2, (box.y0 + box.y1) / 2 + size / 3, code, size, { weight: "bold" });
+  return label((box.x0 + box.x1) / 2, box.y0 - 4, code, 9, { weight: "bold" });
+}
+
 export function sideProfileDiagram(input: TSideProfileInput): TDiagram {
   const { vessel, tank } = input;
   const layout = profileLayout(vessel);
   const box = tankBox(layout, tank.kind, tank.frameFrom, tank.frameTo);
-  const code = keepInside(
-    label((box.x0 + box.x1) / 2, (box.y0 + box.y1) / 2 + 3.5, tank.code, 10, { weight: "bold" }),
-    PROFILE.width,
-  );
+  const code = keepInside(codeLabel(box, tank.code), PROFILE.width);
   const shapes: TShape[] = [
     ...midshipBand(layout, vessel),
     hullOutline(layout),

@@ -309,3 +309,18 @@ describe("PDF rendering", () => {
     expect(strings).toEqual(expect.arrayContaining(["DB3P", "Fr. 196", "Fr. 232", "Fr. 210", "Lower hopper", "Side shell"]));
   });
 });
+
+describe("tank code label", () => {
+  it("fits inside a narrow tank box by a smaller size, or sits above the box", () => {
+    const vessel = { frameFirst: 0, frameLast: 280, midshipFromFrame: null, midshipToFrame: null, engineRoomFwdBulkheadFrame: null, collisionBulkheadFrame: null };
+    for (const [from, to] of [[100, 132], [140, 150], [140, 142]] as const) {
+      const d = sideProfileDiagram({ vessel, tank: { code: "No. 5 DB WBT P", kind: "double_bottom", frameFrom: from, frameTo: to }, landmarks: [] });
+      const code = d.shapes.find((s) => s.type === "text" && s.text === "No. 5 DB WBT P")!;
+      const box = d.shapes.find((s) => s.type === "rect" && s.fill === DIAGRAM_PALETTE.tank) as Extract<TShape, { type: "rect" }>;
+      const b = shapeBounds(code);
+      const inside = b.x0 >= box.x && b.x1 <= box.x + box.width;
+      const above = b.y1 <= box.y;
+      expect(inside || above, `Fr. ${from}–${to}`).toBe(true);
+    }
+  });
+});

@@ -13,7 +13,7 @@ export default async function VesselsPage() {
   return (
     <>
       <PageHeader title="Vessels" subtitle="The vessels your roles give you access to" />
-      {vessels.length ? <VesselTable vessels={vessels} /> : <Notice>No vessel is assigned to you yet. Ask the company administrator.</Notice>}
+      {vessels.length ? <VesselTable vessels={vessels} /> : <Notice>{actor.memberships.every((m) => m.role === "surveyor") ? "As a class surveyor you see the reports shared with you, under Shared reports." : "No vessel is assigned to you yet. Ask the company administrator."}</Notice>}
     </>
   );
 }

@@ -31,7 +31,12 @@ export default async function TankPage({ params }: { params: Promise<{ vesselId:
     <>
       <PageHeader
         title={tank.code}
-        subtitle={`${tank.name} · ${TANK_SIDE_LABELS[tank.side]} · ${TANK_KIND_LABELS[tank.kind]} · ${formatFrames(tank.frameFrom, tank.frameTo)} · ${vessel.name}`}
+        subtitle={
+          <>
+            {tank.name} · {TANK_SIDE_LABELS[tank.side]} · {TANK_KIND_LABELS[tank.kind]} · {formatFrames(tank.frameFrom, tank.frameTo)} ·{" "}
+            <Link href={`/vessels/${vesselId}`} className="text-hull-700 underline">{vessel.name}</Link>
+          </>
+        }
         actions={
           <>
             {roles.includes("officer") || roles.includes("master") ? (

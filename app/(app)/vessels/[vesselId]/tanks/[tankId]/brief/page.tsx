@@ -51,7 +51,7 @@ export default async function BriefPage({ params }: { params: Promise<{ vesselId
               <li key={c.id}>
                 <p className="font-semibold">{c.title}</p>
                 <p className="text-sm">Look for: {c.lookFor}</p>
-                <p className="text-xs text-slate-600">Why: {c.why} ({c.because})</p>
+                <p className="text-xs text-slate-600">Why: {c.why} Here: {c.because}</p>
               </li>
             ))}
           </ul>
