@@ -27,7 +27,7 @@ export function GrantRoleForm({ action, userId, vessels }: { action: TAction; us
 export function RevokeRoleButton({ action, membershipId, label }: { action: TAction; membershipId: string; label: string }) {
   const [state, formAction, pending] = useActionState(action, IDLE_STATE);
   return (
-    <form action={formAction} className="inline">
+    <form action={formAction} onSubmit={(e) => { if (!window.confirm(`Remove ${label}?`)) e.preventDefault(); }} className="inline">
       <input type="hidden" name="membershipId" value={membershipId} />
       <button type="submit" disabled={pending} aria-label={`Remove ${label}`} className="ml-1 text-xs text-red-700 hover:underline">
         remove

@@ -70,7 +70,7 @@ export default async function TankPage({ params }: { params: Promise<{ vesselId:
                     {describeMember(m)}
                     {m.label ? <span className="text-slate-600"> · {m.label}</span> : null}
                   </span>
-                  {canEdit ? <ActionButton action={removeMemberAction} fields={{ ...ids, memberId: m.id }} label="Remove" variant="danger" /> : null}
+                  {canEdit ? <ActionButton action={removeMemberAction} fields={{ ...ids, memberId: m.id }} label="Remove" variant="danger" confirm={`Remove "${describeMember(m)}" from the catalogue?`} /> : null}
                 </li>
               ))}
             </ul>
@@ -86,7 +86,7 @@ export default async function TankPage({ params }: { params: Promise<{ vesselId:
               {rows.specialFrames.map((s) => (
                 <li key={s.id} className="flex flex-wrap items-center justify-between gap-2 py-2">
                   <span><span className="font-semibold">Fr. {s.frame}</span> — {s.note}</span>
-                  {canEdit ? <ActionButton action={removeSpecialFrameAction} fields={{ ...ids, specialFrameId: s.id }} label="Remove" variant="danger" /> : null}
+                  {canEdit ? <ActionButton action={removeSpecialFrameAction} fields={{ ...ids, specialFrameId: s.id }} label="Remove" variant="danger" confirm={`Remove the note on Fr. ${s.frame}?`} /> : null}
                 </li>
               ))}
             </ul>
