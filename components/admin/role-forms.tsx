@@ -3,20 +3,23 @@
 import { useActionState } from "react";
 import { Button } from "@/components/ui/button";
 import { IDLE_STATE, type TActionState } from "@/lib/http/action-state";
+import { Notice } from "@/components/ui/notice";
+import { useCheckedForm } from "@/components/ui/use-checked-form";
+import { ZMembershipInput } from "@/lib/schemas/user";
 import { FormStatus } from "./form-status";
 import { RoleFields } from "./user-form";
 
 type TAction = (prev: TActionState, form: FormData) => Promise<TActionState>;
 
 export function GrantRoleForm({ action, userId, vessels }: { action: TAction; userId: string; vessels: { id: string; name: string }[] }) {
-  const [state, formAction, pending] = useActionState(action, IDLE_STATE);
+  const f = useCheckedForm(action, ZMembershipInput);
   return (
-    <form action={formAction} className="space-y-2" noValidate>
-      <FormStatus state={state} />
+    <form action={f.formAction} onSubmit={f.onSubmit} className="space-y-2" noValidate>
+      {f.summary ? <Notice tone="error">{f.summary}</Notice> : <FormStatus state={f.state} />}
       <input type="hidden" name="userId" value={userId} />
-      <div key={state.status === "error" ? JSON.stringify(state.values) : state.status} className="grid gap-2 sm:grid-cols-[1fr_1fr_auto] sm:items-end">
-        <RoleFields state={state} vessels={vessels} compact />
-        <Button type="submit" variant="secondary" disabled={pending}>
+      <div key={f.remountKey} className="grid gap-2 sm:grid-cols-[1fr_1fr_auto] sm:items-end">
+        <RoleFields f={f} vessels={vessels} compact />
+        <Button type="submit" variant="secondary" disabled={f.pending}>
           Grant role
         </Button>
       </div>

@@ -1,30 +1,34 @@
 "use client";
 
-import { useActionState } from "react";
 import { Button } from "@/components/ui/button";
 import { SelectField, TextField } from "@/components/ui/field";
-import { IDLE_STATE, type TActionState } from "@/lib/http/action-state";
+import { Notice } from "@/components/ui/notice";
+import { useCheckedForm } from "@/components/ui/use-checked-form";
+import type { TActionState } from "@/lib/http/action-state";
+import { ZUserInput } from "@/lib/schemas/user";
 import { ROLE_LABELS, ROLES } from "@/lib/vocabulary";
-import { fieldError, fieldValue, FormStatus } from "./form-status";
+import { FormStatus } from "./form-status";
 
 type TAction = (prev: TActionState, form: FormData) => Promise<TActionState>;
 type TVesselOption = { id: string; name: string };
 
-export function RoleFields({ state, vessels, compact = false }: { state: TActionState; vessels: TVesselOption[]; compact?: boolean }) {
+type TFieldAccess = { value: (name: string) => string; error: (name: string) => string | undefined };
+
+export function RoleFields({ f, vessels, compact = false }: { f: TFieldAccess; vessels: TVesselOption[]; compact?: boolean }) {
   return (
     <>
       <SelectField
         label="Role"
         name="role"
-        defaultValue={fieldValue(state, "role") || "officer"}
-        error={fieldError(state, "role")}
+        defaultValue={f.value("role") || "officer"}
+        error={f.error("role")}
         options={ROLES.map((r) => ({ value: r, label: ROLE_LABELS[r] }))}
       />
       <SelectField
         label="Vessel"
         name="vesselId"
-        defaultValue={fieldValue(state, "vesselId")}
-        error={fieldError(state, "vesselId")}
+        defaultValue={f.value("vesselId")}
+        error={f.error("vesselId")}
         hint={compact ? undefined : "For officer and master only; the other roles apply company-wide"}
         options={[{ value: "", label: "— company-wide —" }, ...vessels.map((v) => ({ value: v.id, label: v.name }))]}
       />
@@ -33,28 +37,27 @@ export function RoleFields({ state, vessels, compact = false }: { state: TAction
 }
 
 export function UserForm({ action, vessels }: { action: TAction; vessels: TVesselOption[] }) {
-  const [state, formAction, pending] = useActionState(action, IDLE_STATE);
-  const key = state.status === "error" ? JSON.stringify(state.values) : state.status;
+  const f = useCheckedForm(action, ZUserInput);
   return (
-    <form action={formAction} className="space-y-4" noValidate>
-      <FormStatus state={state} />
-      <div key={key} className="grid gap-4 sm:grid-cols-2">
-        <TextField label="E-mail" name="email" type="email" required defaultValue={fieldValue(state, "email")} error={fieldError(state, "email")} />
-        <TextField label="Name" name="name" required defaultValue={fieldValue(state, "name")} error={fieldError(state, "name")} />
-        <TextField label="Rank or position" name="rank" defaultValue={fieldValue(state, "rank")} error={fieldError(state, "rank")} />
+    <form action={f.formAction} onSubmit={f.onSubmit} className="space-y-4" noValidate>
+      {f.summary ? <Notice tone="error">{f.summary}</Notice> : <FormStatus state={f.state} />}
+      <div key={f.remountKey} className="grid gap-4 sm:grid-cols-2">
+        <TextField label="E-mail" name="email" type="email" required defaultValue={f.value("email")} error={f.error("email")} />
+        <TextField label="Name" name="name" required defaultValue={f.value("name")} error={f.error("name")} />
+        <TextField label="Rank or position" name="rank" defaultValue={f.value("rank")} error={f.error("rank")} />
         <TextField
           label="Initial password"
           name="password"
           type="password"
           autoComplete="new-password"
           required
-          error={fieldError(state, "password")}
+          error={f.error("password")}
           hint="At least 12 characters; tell it to the user in person"
         />
-        <RoleFields state={state} vessels={vessels} />
+        <RoleFields f={f} vessels={vessels} />
       </div>
-      <Button type="submit" disabled={pending}>
-        {pending ? "Creating…" : "Create user"}
+      <Button type="submit" disabled={f.pending}>
+        {f.pending ? "Creating…" : "Create user"}
       </Button>
     </form>
   );

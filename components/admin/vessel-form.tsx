@@ -1,11 +1,13 @@
 "use client";
 
-import { useActionState } from "react";
 import { Button } from "@/components/ui/button";
 import { SelectField, TextField } from "@/components/ui/field";
-import { IDLE_STATE, type TActionState } from "@/lib/http/action-state";
+import { Notice } from "@/components/ui/notice";
+import { useCheckedForm } from "@/components/ui/use-checked-form";
+import type { TActionState } from "@/lib/http/action-state";
+import { ZVesselInput } from "@/lib/schemas/vessel";
 import { VESSEL_TYPE_LABELS, VESSEL_TYPES } from "@/lib/vocabulary";
-import { fieldError, fieldValue, FormStatus } from "./form-status";
+import { FormStatus } from "./form-status";
 
 type TVesselValues = Partial<Record<string, string | number | null>>;
 type TAction = (prev: TActionState, form: FormData) => Promise<TActionState>;
@@ -21,15 +23,14 @@ const FRAME_FIELDS = [
 ] as const;
 
 export function VesselForm({ action, vessel, vesselId }: { action: TAction; vessel?: TVesselValues; vesselId?: string }) {
-  const [state, formAction, pending] = useActionState(action, IDLE_STATE);
-  const v = (name: string) => fieldValue(state, name, vessel?.[name]);
-  const e = (name: string) => fieldError(state, name);
-  // Remount the fields after a refused save so they show what was typed.
-  const key = state.status === "error" ? JSON.stringify(state.values) : "stored";
+  const f = useCheckedForm(action, ZVesselInput);
+  const v = (name: string) => f.value(name, vessel?.[name]);
+  const e = f.error;
+  const key = f.remountKey;
   return (
-    <form action={formAction} className="space-y-6" noValidate>
+    <form action={f.formAction} onSubmit={f.onSubmit} className="space-y-6" noValidate>
       {vesselId ? <input type="hidden" name="$vesselId" value={vesselId} /> : null}
-      <FormStatus state={state} />
+      {f.summary ? <Notice tone="error">{f.summary}</Notice> : <FormStatus state={f.state} />}
       <fieldset key={key} className="grid gap-4 sm:grid-cols-2">
         <legend className="mb-2 text-lg font-semibold text-hull-900">Identity</legend>
         <TextField label="Name" name="name" required defaultValue={v("name")} error={e("name")} />
@@ -67,8 +68,8 @@ export function VesselForm({ action, vessel, vesselId }: { action: TAction; vess
           <TextField key={name} label={label} name={name} inputMode="numeric" defaultValue={v(name)} error={e(name)} hint={hint} />
         ))}
       </fieldset>
-      <Button type="submit" disabled={pending}>
-        {pending ? "Saving…" : vesselId ? "Save vessel" : "Create vessel"}
+      <Button type="submit" disabled={f.pending}>
+        {f.pending ? "Saving…" : vesselId ? "Save vessel" : "Create vessel"}
       </Button>
     </form>
   );

@@ -47,6 +47,14 @@ export async function unsafeGetInspectionScope({ inspectionId }: { inspectionId:
   return row;
 }
 
+export async function getInspectionTankId({ orgId, inspectionId }: TOrg & { inspectionId: string }) {
+  const [row] = await db()
+    .select({ tankId: inspections.tankId })
+    .from(inspections)
+    .where(and(eq(inspections.orgId, orgId), eq(inspections.id, inspectionId)));
+  return row?.tankId;
+}
+
 export async function listVesselInspections({ orgId, vesselId }: TOrg & { vesselId: string }) {
   return db()
     .select({

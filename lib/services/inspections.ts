@@ -34,6 +34,7 @@ import { VESSEL_READERS } from "./vessels";
 
 /** Who carries out and edits an inspection: the vessel's officers and master. */
 export const INSPECTORS = ["officer", "master"] as const;
+export const canInspect = (roles: readonly string[]) => roles.some((r) => (INSPECTORS as readonly string[]).includes(r));
 
 export async function startInspectionAs(actor: TActor, vesselId: string, body: unknown) {
   const { orgId } = await authorizeVessel({ actor, vesselId, allow: INSPECTORS });
@@ -56,7 +57,7 @@ export async function listInspectionsAs(actor: TActor, vesselId: string) {
 /** The whole inspection with everything the product computes from it. */
 export async function readInspectionView(actor: TActor, inspectionId: string) {
   const auth = await authorizeInspection({ actor, inspectionId, allow: VESSEL_READERS });
-  return buildView(auth.orgId, inspectionId, auth.vessel, auth.roles.some((r) => (INSPECTORS as readonly string[]).includes(r)));
+  return buildView(auth.orgId, inspectionId, auth.vessel, canInspect(auth.roles));
 }
 
 async function buildView(orgId: string, inspectionId: string, vessel: { id: string; name: string; imoNumber: string; utcOffsetMinutes: number | null }, isInspector: boolean) {
@@ -168,9 +169,10 @@ export async function writeInspectionAs(actor: TActor, inspectionId: string, mut
     }
   }
   const { version } = validateInput(ZVersion, body);
-  const bundle = await q.getInspectionBundle({ orgId, inspectionId });
-  if (!bundle) throw new AppError("not_found", "No such inspection.");
-  const tank = await getTank({ orgId, vesselId: auth.vessel.id, tankId: bundle.inspection.tankId });
+  // Every autosave passes here: read only what the write needs (the tank and its catalogue).
+  const tankId = await q.getInspectionTankId({ orgId, inspectionId });
+  if (!tankId) throw new AppError("not_found", "No such inspection.");
+  const tank = await getTank({ orgId, vesselId: auth.vessel.id, tankId });
   const catalogue = toCatalogue(tank!, await getTankCatalogue({ orgId, tankId: tank!.id }));
   try {
     const result = await db().transaction(async (tx) => {

@@ -31,8 +31,6 @@ export const STRUCTURE_EDITORS = ["officer", "master", "superintendent", "admin"
 
 const ZId = z.uuid();
 
-const validate = validateInput;
-
 function duplicateCode(error: unknown, code: string): never {
   if (databaseErrorCode(error) === "23505") {
     throw new AppError("conflict", `A tank with the code "${code}" already exists on this vessel.`, [{ path: "code", message: "is already used on this vessel" }]);
@@ -64,13 +62,13 @@ async function editableTank(actor: TActor, vesselId: string, tankId: string) {
 
 export async function createTankAs(actor: TActor, vesselId: string, body: unknown) {
   const { orgId, vessel } = await authorizeVessel({ actor, vesselId, allow: STRUCTURE_EDITORS });
-  const input = validate(tankInputSchema(vessel), body);
+  const input = validateInput(tankInputSchema(vessel), body);
   return createTank({ orgId, vesselId, actorUserId: actor.userId, input }).catch((e) => duplicateCode(e, input.code));
 }
 
 export async function updateTankAs(actor: TActor, vesselId: string, tankId: string, body: unknown) {
   const { orgId, vessel, catalogue } = await editableTank(actor, vesselId, tankId);
-  const input = validate(tankInputSchema(vessel), body);
+  const input = validateInput(tankInputSchema(vessel), body);
   const outside = [
     ...catalogue.members.flatMap((m) => m.frames ?? []),
     ...catalogue.specialFrames.map((s) => s.frame),
@@ -95,7 +93,7 @@ export async function deleteTankAs(actor: TActor, vesselId: string, tankId: stri
 
 export async function addMemberAs(actor: TActor, vesselId: string, tankId: string, body: unknown) {
   const { orgId, tank, catalogue } = await editableTank(actor, vesselId, tankId);
-  const input = validate(memberInputSchema(tank), body);
+  const input = validateInput(memberInputSchema(tank), body);
   const misfit = memberMisfit(tank.kind, input);
   if (misfit) throw new AppError("unprocessable", misfit.message, [{ path: misfit.path, message: misfit.message }]);
   const clash = memberConflict(catalogue.members, {
@@ -115,7 +113,7 @@ export async function removeMemberAs(actor: TActor, vesselId: string, tankId: st
 
 export async function addSpecialFrameAs(actor: TActor, vesselId: string, tankId: string, body: unknown) {
   const { orgId, tank, catalogue } = await editableTank(actor, vesselId, tankId);
-  const input = validate(specialFrameInputSchema(tank), body);
+  const input = validateInput(specialFrameInputSchema(tank), body);
   if (catalogue.specialFrames.some((s) => s.frame === input.frame)) {
     throw new AppError("conflict", `Fr. ${input.frame} already has a note.`, [{ path: "frame", message: "already has a note" }]);
   }
@@ -134,7 +132,7 @@ export async function mirrorTankAs(actor: TActor, vesselId: string, tankId: stri
   const { orgId, vessel, tank, rows, catalogue } = await editableTank(actor, vesselId, tankId);
   const mirrored = mirrorTankInput(tank);
   if (!mirrored) throw new AppError("unprocessable", "A centre tank has no other side to copy to.");
-  const input: TTankInput = validate(tankInputSchema(vessel), mirrored);
+  const input: TTankInput = validateInput(tankInputSchema(vessel), mirrored);
   return createMirroredTank({
     orgId, vesselId, actorUserId: actor.userId, input, sourceTankId: tank.id, catalogue,
     members: rows.members.map((m) => ({ label: m.label, note: m.note })),

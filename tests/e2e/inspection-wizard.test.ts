@@ -6,7 +6,7 @@ import { COATING_AREA_LABELS, COATING_AREAS } from "@/lib/vocabulary";
 import { launchBrowser } from "../fixtures/browser";
 import { testEnv } from "../fixtures/env";
 import { buildScenario, PASSWORD, testDb, type TScenario } from "../fixtures/scenario";
-import { SignInPage } from "./pages/sign-in-page";
+import { signedInTabletPage } from "./pages/sign-in-page";
 import { WizardPage } from "./pages/wizard-page";
 
 const ARTIFACTS = path.join(import.meta.dirname, "..", "artifacts");
@@ -18,10 +18,7 @@ beforeAll(async () => {
   s = await buildScenario();
   await testDb().insert(tankMembers).values({ orgId: s.org.id, tankId: s.tankOf(s.ownVessel.id).id, kind: "longitudinal", platingRegion: "bottom_shell", numberFrom: 1, numberTo: 12 });
   browser = await launchBrowser();
-  page = await browser.newPage({ viewport: { width: 768, height: 1024 } });
-  await new SignInPage(page, testEnv().baseUrl).open();
-  await new SignInPage(page, testEnv().baseUrl).signIn(s.users.officer.email, PASSWORD);
-  await page.waitForURL(/\/vessels\//);
+  page = await signedInTabletPage(browser, testEnv().baseUrl, s.users.officer.email, PASSWORD);
 });
 afterAll(async () => {
   await browser?.close();

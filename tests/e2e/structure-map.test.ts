@@ -5,7 +5,7 @@ import { launchBrowser } from "../fixtures/browser";
 import { testEnv } from "../fixtures/env";
 import { pdfText } from "../fixtures/pdf";
 import { buildScenario, PASSWORD, type TScenario } from "../fixtures/scenario";
-import { SignInPage } from "./pages/sign-in-page";
+import { signedInTabletPage } from "./pages/sign-in-page";
 import { NewTankPage, TankPage } from "./pages/structure-map-pages";
 
 const ARTIFACTS = path.join(import.meta.dirname, "..", "artifacts");
@@ -16,10 +16,7 @@ let page: Page;
 beforeAll(async () => {
   s = await buildScenario();
   browser = await launchBrowser();
-  page = await browser.newPage({ viewport: { width: 768, height: 1024 }, acceptDownloads: true });
-  await new SignInPage(page, testEnv().baseUrl).open();
-  await new SignInPage(page, testEnv().baseUrl).signIn(s.users.officer.email, PASSWORD);
-  await page.waitForURL(/\/vessels\//);
+  page = await signedInTabletPage(browser, testEnv().baseUrl, s.users.officer.email, PASSWORD);
 });
 afterAll(async () => {
   await browser?.close();

@@ -32,3 +32,13 @@ export class AppShell {
     await this.page.getByRole("button", { name: "Sign out" }).click();
   }
 }
+
+/** A tablet-sized page signed in as the given user, landed on their home page. */
+export async function signedInTabletPage(browser: import("playwright-core").Browser, baseUrl: string, email: string, password: string) {
+  const page = await browser.newPage({ viewport: { width: 768, height: 1024 }, acceptDownloads: true });
+  const signIn = new SignInPage(page, baseUrl);
+  await signIn.open();
+  await signIn.signIn(email, password);
+  await page.waitForURL((url) => !url.pathname.startsWith("/sign-in"));
+  return page;
+}

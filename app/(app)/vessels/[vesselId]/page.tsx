@@ -6,7 +6,7 @@ import { Notice } from "@/components/ui/notice";
 import { PageHeader } from "@/components/ui/page-header";
 import { pageActor, pageAuthorize } from "@/lib/auth/page";
 import { InspectionList } from "@/components/inspections/inspection-list";
-import { INSPECTORS, listInspectionsAs } from "@/lib/services/inspections";
+import { canInspect, listInspectionsAs } from "@/lib/services/inspections";
 import { canEditStructure, readVesselTanks } from "@/lib/services/tanks";
 import { VESSEL_TYPE_LABELS } from "@/lib/vocabulary";
 
@@ -19,7 +19,7 @@ export default async function VesselPage({ params }: { params: Promise<{ vesselI
   const actor = await pageActor();
   const { vessel, tanks, roles } = await pageAuthorize(() => readVesselTanks(actor, vesselId));
   const canEdit = canEditStructure(roles);
-  const canInspect = roles.some((r) => (INSPECTORS as readonly string[]).includes(r));
+  const mayInspect = canInspect(roles);
   const inspections = await listInspectionsAs(actor, vesselId);
   return (
     <>
@@ -29,7 +29,7 @@ export default async function VesselPage({ params }: { params: Promise<{ vesselI
         actions={
           canEdit ? (
             <>
-              {canInspect ? <Link href={`/vessels/${vesselId}/inspections/new`} className="rounded-md bg-hull-700 px-3 py-2 text-sm font-semibold text-white hover:bg-hull-800">Start an inspection</Link> : null}
+              {mayInspect ? <Link href={`/vessels/${vesselId}/inspections/new`} className="rounded-md bg-hull-700 px-3 py-2 text-sm font-semibold text-white hover:bg-hull-800">Start an inspection</Link> : null}
               <Link href={`/vessels/${vesselId}/edit`} className={linkButton}>Edit particulars</Link>
               <Link href={`/vessels/${vesselId}/tanks/import`} className={linkButton}>Import tanks (CSV)</Link>
               <Link href={`/vessels/${vesselId}/tanks/new`} className="rounded-md bg-hull-700 px-3 py-2 text-sm font-semibold text-white hover:bg-hull-800">New tank</Link>

@@ -9,6 +9,7 @@ import { Notice } from "@/components/ui/notice";
 import { PageHeader } from "@/components/ui/page-header";
 import { pageActor, pageAuthorize } from "@/lib/auth/page";
 import { crossSectionDiagram, sideProfileDiagram } from "@/lib/diagram/tank-diagram";
+import { canInspect } from "@/lib/services/inspections";
 import { canEditStructure, readTank } from "@/lib/services/tanks";
 import { describeMember, landmarkFrames } from "@/lib/structure/catalogue";
 import { formatFrames } from "@/lib/structure/frames";
@@ -39,7 +40,7 @@ export default async function TankPage({ params }: { params: Promise<{ vesselId:
         }
         actions={
           <>
-            {roles.includes("officer") || roles.includes("master") ? (
+            {canInspect(roles) ? (
               <Link href={`/vessels/${vesselId}/inspections/new?tank=${tankId}`} className="rounded-md border border-slate-300 bg-white px-3 py-2 text-sm font-semibold">Start an inspection</Link>
             ) : null}
             <Link href={`/vessels/${vesselId}/tanks/${tankId}/brief`} className="rounded-md bg-hull-700 px-3 py-2 text-sm font-semibold text-white hover:bg-hull-800">Pre-entry brief</Link>
