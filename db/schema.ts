@@ -51,6 +51,7 @@ import {
   TANK_KINDS,
   TANK_SIDES,
   TWENTY_PERCENT_RULES,
+  UPLOAD_STATUSES,
   VESSEL_TYPES,
 } from "@/lib/vocabulary";
 
@@ -78,6 +79,7 @@ export const anodeKindEnum = pgEnum("anode_kind", ANODE_KINDS);
 export const notInspectedReasonEnum = pgEnum("not_inspected_reason", NOT_INSPECTED_REASONS);
 export const photoKindEnum = pgEnum("photo_kind", PHOTO_KINDS);
 export const photoStatusEnum = pgEnum("photo_status", PHOTO_STATUSES);
+export const uploadStatusEnum = pgEnum("upload_status", UPLOAD_STATUSES);
 export const signatureKindEnum = pgEnum("signature_kind", SIGNATURE_KINDS);
 export const recipientKindEnum = pgEnum("recipient_kind", RECIPIENT_KINDS);
 export const deliveryStatusEnum = pgEnum("delivery_status", DELIVERY_STATUSES);
@@ -370,10 +372,14 @@ export const drawings = pgTable(
     contentType: text("content_type").notNull(),
     sizeBytes: integer("size_bytes").notNull(),
     sha256: text("sha256"),
+    status: uploadStatusEnum("status").notNull().default("awaiting_upload"),
+    /** An upload that has not arrived by then is removed by the clean-up job. */
+    uploadExpiresAt: timestamp("upload_expires_at", { withTimezone: true }),
+    fileLabel: text("file_label"),
     uploadedBy: uuid("uploaded_by").references(() => users.id, { onDelete: "set null" }),
     createdAt: createdAt(),
   },
-  (t) => [index("drawings_vessel_idx").on(t.orgId, t.vesselId)],
+  (t) => [index("drawings_vessel_idx").on(t.orgId, t.vesselId), index("drawings_upload_expiry_idx").on(t.uploadExpiresAt).where(sql`status = 'awaiting_upload'`)],
 );
 
 // ---------------------------------------------------------------- inspections
@@ -618,6 +624,9 @@ export const photos = pgTable(
     width: integer("width"),
     height: integer("height"),
     capturedAt: timestamp("captured_at", { withTimezone: true }),
+    /** Why the background job refused the image (it could not be decoded). */
+    statusMessage: text("status_message"),
+    uploadExpiresAt: timestamp("upload_expires_at", { withTimezone: true }),
     fileLabel: text("file_label"),
     sortOrder: integer("sort_order").notNull().default(0),
     uploadedBy: uuid("uploaded_by").references(() => users.id, { onDelete: "set null" }),
@@ -625,6 +634,7 @@ export const photos = pgTable(
   },
   (t) => [
     index("photos_inspection_idx").on(t.orgId, t.inspectionId, t.sortOrder),
+    index("photos_upload_expiry_idx").on(t.uploadExpiresAt).where(sql`status = 'awaiting_upload'`),
     check("photos_overview_link", sql`${t.kind} = 'close_up' or ${t.overviewPhotoId} is null`),
   ],
 );

@@ -7,13 +7,19 @@ const ZServerEnv = z.object({
   AUTH_SECRET: z.string().min(32, "must be at least 32 characters"),
   APP_URL: z.url().default("http://127.0.0.1:3000"),
   DATABASE_POOL_MAX: z.coerce.number().int().min(1).max(100).default(10),
-  // Object storage and mail are filled in by later features; optional until then.
+  // Object storage through the S3 API (AWS S3 or any S3-compatible store).
   S3_ENDPOINT: z.url().optional(),
+  /** The address browsers use for presigned URLs, when it differs from the one the server uses. */
+  S3_PUBLIC_ENDPOINT: z.url().optional(),
   S3_REGION: z.string().min(1).default("us-east-1"),
-  S3_BUCKET: z.string().min(3).optional(),
+  S3_BUCKET: z.string({ error: "is required: the bucket for photos, drawings and signed PDFs" }).min(3),
   S3_ACCESS_KEY_ID: z.string().min(1).optional(),
   S3_SECRET_ACCESS_KEY: z.string().min(1).optional(),
   S3_FORCE_PATH_STYLE: z.stringbool().default(false),
+  /** How long a presigned upload URL stays valid. */
+  UPLOAD_URL_TTL_SECONDS: z.coerce.number().int().min(30).max(3600).default(900),
+  /** Whether this app instance also works the background job queue (on by default). */
+  JOBS_WORKER: z.stringbool().default(true),
   SMTP_URL: z.url({ protocol: /^smtps?$/, error: "must be an smtp:// or smtps:// URL" }).optional(),
   MAIL_FROM: z.string().min(3).default("Tankwright <reports@tankwright.test>"),
 });

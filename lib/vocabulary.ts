@@ -124,6 +124,13 @@ export const PLATING_REGION_LABELS: Record<TPlatingRegion, string> = {
 
 export const STRINGER_NUMBERING = ["from_top", "from_bottom"] as const;
 export const DRAWING_KINDS = ["general_arrangement", "midship_section", "shell_expansion", "other"] as const;
+export type TDrawingKind = (typeof DRAWING_KINDS)[number];
+export const DRAWING_KIND_LABELS: Record<TDrawingKind, string> = {
+  general_arrangement: "General arrangement",
+  midship_section: "Midship section",
+  shell_expansion: "Shell expansion",
+  other: "Other drawing",
+};
 
 export const INSPECTION_STATUSES = ["draft", "submitted", "returned", "countersigned", "superseded"] as const;
 export type TInspectionStatus = (typeof INSPECTION_STATUSES)[number];
@@ -177,7 +184,11 @@ export const NOT_INSPECTED_REASONS = [
   "other",
 ] as const;
 export const PHOTO_KINDS = ["overview", "close_up"] as const;
+export type TPhotoKind = (typeof PHOTO_KINDS)[number];
+export const PHOTO_KIND_LABELS: Record<TPhotoKind, string> = { overview: "Overview", close_up: "Close-up" };
 export const PHOTO_STATUSES = ["awaiting_upload", "processing", "ready", "rejected"] as const;
+export type TPhotoStatus = (typeof PHOTO_STATUSES)[number];
+export const UPLOAD_STATUSES = ["awaiting_upload", "ready"] as const;
 export const SIGNATURE_KINDS = ["officer", "master"] as const;
 export const RECIPIENT_KINDS = ["office", "class"] as const;
 export const DELIVERY_STATUSES = ["queued", "sent", "failed"] as const;

@@ -134,3 +134,24 @@ require_free_port() {
 # start_bg: runs a command in its own process group, so that stop_bg ends it with all its children.
 start_bg() { setsid "$@" & BG_PID=$!; }
 stop_bg() { [ -n "${1:-}" ] && kill -TERM -- "-$1" 2>/dev/null || true; }
+
+# start_s3_fake DIR PORT ORIGINS: the local S3-compatible store (docker-free-minio-fake/),
+# unless S3_BUCKET points at a real one. Exports the S3_* settings the app reads; sets S3_PID.
+S3_PID=""
+start_s3_fake() {
+  local dir=$1 port=$2 origins=$3
+  if [ -n "${S3_BUCKET:-}" ]; then log "using the object storage in S3_BUCKET ($S3_BUCKET)"; return; fi
+  require_free_port "$port"
+  mkdir -p "$dir"
+  log "starting the local S3 store on 127.0.0.1:$port (files in ${dir#$ROOT/})"
+  S3_FAKE_DIR="$dir" S3_FAKE_PORT="$port" S3_BUCKET=tankwright S3_FAKE_CORS_ORIGINS="$origins" \
+    start_bg node "$ROOT/docker-free-minio-fake/server.mjs"
+  S3_PID=$BG_PID
+  export S3_ENDPOINT="http://127.0.0.1:$port" S3_REGION=us-east-1 S3_BUCKET=tankwright \
+    S3_ACCESS_KEY_ID=S3RVER S3_SECRET_ACCESS_KEY=S3RVER S3_FORCE_PATH_STYLE=true
+  local deadline=$((SECONDS + 30))
+  until node -e 'const s=require("net").connect(+process.argv[1],"127.0.0.1");s.on("connect",()=>process.exit(0));s.on("error",()=>process.exit(1))' "$port"; do
+    [ $SECONDS -lt $deadline ] || die "the local S3 store did not start on port $port"
+    sleep 0.2
+  done
+}

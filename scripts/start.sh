@@ -9,6 +9,7 @@ MODE=start; [ "${1:-}" = "--dev" ] && MODE=dev
 PG_PORT=${TANKWRIGHT_PG_PORT:-54329}
 APP_PORT=${PORT:-3000}
 PG_DATA="$ROOT/.data/postgres"
+S3_PORT=${TANKWRIGHT_S3_PORT:-4569}
 PIDS=()
 
 cleanup() {
@@ -28,6 +29,8 @@ if [ -z "${DATABASE_URL:-}" ]; then
 fi
 ensure_auth_secret
 export APP_URL="${APP_URL:-http://127.0.0.1:$APP_PORT}" NEXTAUTH_URL="${NEXTAUTH_URL:-${APP_URL:-http://127.0.0.1:$APP_PORT}}"
+start_s3_fake "$ROOT/.data/s3" "$S3_PORT" "$APP_URL,http://localhost:$APP_PORT"
+[ -n "$S3_PID" ] && PIDS+=("$S3_PID")
 
 log "applying migrations"
 (cd "$ROOT" && npx tsx scripts/migrate.ts)
@@ -57,7 +60,10 @@ cat <<MSG
     surveyor@tankwright.test    class surveyor
     admin@tankwright.test       company administrator
 
-  Ctrl-C stops the app${OWN_PG:+ and PostgreSQL}.
+  Photos, drawings and PDFs: ${S3_ENDPOINT:-AWS S3}, bucket $S3_BUCKET
+  Background jobs (photo variants, clean-up) run inside the app (JOBS_WORKER).
+
+  Ctrl-C stops the app${S3_PID:+, the local S3 store}${OWN_PG:+ and PostgreSQL}.
 
 MSG
 wait "${PIDS[@]}"

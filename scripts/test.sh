@@ -10,11 +10,13 @@ PG_PORT=${TANKWRIGHT_TEST_PG_PORT:-54339}
 APP_PORT=${TANKWRIGHT_TEST_APP_PORT:-3100}
 PG_DATA="$ROOT/.data/postgres-test"
 RESULTS="$ROOT/.data/test-results"
+S3_PORT=${TANKWRIGHT_TEST_S3_PORT:-4579}
 APP_PID=""
 
 cleanup() {
   trap - INT TERM EXIT
   stop_bg "$APP_PID"
+  stop_bg "$S3_PID"
   wait 2>/dev/null || true
   [ -n "${PG_BIN:-}" ] && stop_cluster "$PG_DATA"
 }
@@ -30,6 +32,9 @@ export AUTH_SECRET="test-secret-for-throwaway-databases-only-0123456789"
 export NEXTAUTH_SECRET="$AUTH_SECRET"
 export APP_URL="http://127.0.0.1:$APP_PORT" NEXTAUTH_URL="http://127.0.0.1:$APP_PORT"
 export TEST_BASE_URL="$APP_URL"
+# Throwaway objects: a fresh store folder every run.
+rm -rf "$ROOT/.data/s3-test"
+start_s3_fake "$ROOT/.data/s3-test" "$S3_PORT" "$APP_URL"
 cd "$ROOT"
 log "applying migrations to the test database"
 npx tsx scripts/migrate.ts

@@ -1,7 +1,7 @@
 // The pre-entry brief as a PDF: particulars and diagrams, member catalogue,
 // areas of concern with what to look for and why, findings to look at again,
 // and the entry precautions with the caution that the ship's procedure rules.
-import { Document, Page, StyleSheet, Text, View } from "@react-pdf/renderer";
+import { Document, Link, Page, StyleSheet, Text, View } from "@react-pdf/renderer";
 import type { TDiagram } from "@/lib/diagram/tank-diagram";
 import type { TBrief } from "@/lib/structure/brief";
 import { PDF_FONT_FAMILY } from "./fonts";
@@ -41,7 +41,9 @@ function KeyValues({ rows }: { rows: [string, string][] }) {
   );
 }
 
-export function BriefDocument({ brief, vesselName, profile, section }: { brief: TBrief; vesselName: string; profile: TDiagram; section: TDiagram }) {
+export type TBriefDrawing = { title: string; kind: string; url: string };
+
+export function BriefDocument({ brief, vesselName, profile, section, drawings = [] }: { brief: TBrief; vesselName: string; profile: TDiagram; section: TDiagram; drawings?: TBriefDrawing[] }) {
   const position: [string, string][] = [
     ["Midship region", `${brief.position.midship.applies ? "Yes" : "No"} — ${brief.position.midship.why}`],
     ["Engine room", `${brief.position.nearEngineRoom.applies ? "Next to it" : "No"} — ${brief.position.nearEngineRoom.why}`],
@@ -102,6 +104,17 @@ export function BriefDocument({ brief, vesselName, profile, section }: { brief: 
             <Text>{f.lookAt}</Text>
           </View>
         ))}
+
+        {drawings.length ? (
+          <>
+            <Text style={s.h2}>Drawings of the vessel</Text>
+            {drawings.map((d) => (
+              <Text key={d.url} style={s.small}>
+                {d.kind}: {d.title} — <Link src={d.url}>{d.url}</Link>
+              </Text>
+            ))}
+          </>
+        ) : null}
 
         <Text style={s.h2}>Before entry</Text>
         {brief.precautions.map((p) => (

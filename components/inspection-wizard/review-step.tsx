@@ -3,7 +3,7 @@
 import { Notice } from "@/components/ui/notice";
 import { roundKg } from "@/lib/calc/steel";
 import { formatFrames } from "@/lib/structure/frames";
-import { COATING_AREA_LABELS, FINDING_TYPE_LABELS, MEMBER_KIND_LABELS, NOT_INSPECTED_REASON_LABELS, REPAIR_KIND_LABELS } from "@/lib/vocabulary";
+import { COATING_AREA_LABELS, FINDING_TYPE_LABELS, MEMBER_KIND_LABELS, NOT_INSPECTED_REASON_LABELS, PHOTO_KIND_LABELS, REPAIR_KIND_LABELS } from "@/lib/vocabulary";
 import { RatingBadge } from "./rating-badge";
 import type { TView } from "./types";
 
@@ -41,6 +41,24 @@ export function ReviewStep({ view, go }: { view: TView; go: (step: string, field
                 <span className="font-semibold">#{f.number} {FINDING_TYPE_LABELS[f.type]}</span> · {formatFrames(f.frameFrom, f.frameTo)} · {MEMBER_KIND_LABELS[f.memberKind]}{f.memberNumber !== null ? ` ${f.memberNumber}` : ""} — {f.description} · {REPAIR_KIND_LABELS[f.repairKind]}{f.steelWeightKg ? ` · ${roundKg(f.steelWeightKg)} kg` : ""}
               </li>
             ))}
+          </ol>
+        </section>
+      ) : null}
+      {view.photos.length ? (
+        <section className="rounded-lg border border-slate-200 bg-white p-4" aria-label="Photos in report order">
+          <h3 className="mb-2 font-semibold text-hull-900">Photos ({view.photos.length}), in report order</h3>
+          <ol className="grid gap-3 sm:grid-cols-2 lg:grid-cols-3">
+            {view.photos.map((p, i) => {
+              const finding = view.findings.find((f) => f.id === p.findingId);
+              return (
+                <li key={p.id} className={`text-sm ${p.kind === "close_up" ? "border-l-4 border-slate-300 pl-2" : ""}`}>
+                  {/* eslint-disable-next-line @next/next/no-img-element -- a short-lived storage URL */}
+                  {p.thumbUrl ? <img src={p.thumbUrl} alt={p.caption ?? `Photo ${i + 1}`} className="mb-1 w-full rounded border border-slate-200" loading="lazy" /> : null}
+                  <span className="font-semibold">{i + 1}. {p.caption ? PHOTO_KIND_LABELS[p.kind] : "Not captioned"}</span>
+                  {p.caption ? <> · {formatFrames(p.frameFrom!, p.frameTo!)} · {MEMBER_KIND_LABELS[p.memberKind!]}{p.memberNumber !== null ? ` ${p.memberNumber}` : ""}{finding ? ` · finding ${finding.number}` : ""} — {p.caption}</> : null}
+                </li>
+              );
+            })}
           </ol>
         </section>
       ) : null}

@@ -12,6 +12,7 @@ import { CoatingStep } from "./coating-step";
 import { EntryStep } from "./entry-step";
 import { FindingsStep } from "./findings-step";
 import { NotInspectedStep } from "./not-inspected-step";
+import { PhotosStep } from "./photos-step";
 import { RemarksStep } from "./remarks-step";
 import { ReviewStep } from "./review-step";
 import { SedimentStep } from "./sediment-step";
@@ -93,6 +94,7 @@ function WizardBody({ initial, initialStep }: { initial: TView; initialStep: TSt
         {step === "anodes" ? <AnodesStep view={view} /> : null}
         {step === "sediment" ? <SedimentStep view={view} /> : null}
         {step === "not-inspected" ? <NotInspectedStep view={view} /> : null}
+        {step === "photos" ? <PhotosStep view={view} /> : null}
         {step === "remarks" ? <RemarksStep view={view} /> : null}
         {step === "review" ? <ReviewStep view={view} go={go} /> : null}
       </section>

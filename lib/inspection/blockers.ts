@@ -1,9 +1,10 @@
 // What still stands between an inspection and "ready to submit", each with the
 // step and field to go to.
+import { photoProblems, type TPhotoBlockerInput } from "@/lib/photos/order";
 import { judgeReading, ruleSet, type TRuleSetId } from "@/lib/safety/atmosphere";
 import { COATING_AREAS, COATING_AREA_LABELS } from "@/lib/vocabulary";
 
-export type TStep = "entry" | "findings" | "coating" | "anodes" | "sediment" | "not-inspected" | "remarks" | "review";
+export type TStep = "entry" | "findings" | "coating" | "anodes" | "sediment" | "not-inspected" | "photos" | "remarks" | "review";
 export const STEPS: { id: TStep; label: string }[] = [
   { id: "entry", label: "Entry record" },
   { id: "findings", label: "Findings" },
@@ -11,6 +12,7 @@ export const STEPS: { id: TStep; label: string }[] = [
   { id: "anodes", label: "Anodes" },
   { id: "sediment", label: "Sediment" },
   { id: "not-inspected", label: "Not inspected" },
+  { id: "photos", label: "Photos" },
   { id: "remarks", label: "Remarks" },
   { id: "review", label: "Review" },
 ];
@@ -28,6 +30,8 @@ export type TBlockerInput = {
   noSediment: boolean;
   notInspected: number;
   allAreasInspected: boolean;
+  /** The photos and the findings they must show; none when left out. */
+  photos?: TPhotoBlockerInput;
 };
 
 export function inspectionBlockers(i: TBlockerInput): TBlocker[] {
@@ -48,5 +52,6 @@ export function inspectionBlockers(i: TBlockerInput): TBlocker[] {
   if (!i.anodes) out.push({ step: "anodes", field: "meanWastagePct", message: "Anodes: record the anodes and their wastage." });
   if (i.sedimentZones === 0 && !i.noSediment) out.push({ step: "sediment", field: "noSediment", message: "Sediment: record the sediment zones, or confirm that there is none." });
   if (i.notInspected === 0 && !i.allAreasInspected) out.push({ step: "not-inspected", field: "allAreasInspected", message: "Not inspected: list the areas that could not be seen, or confirm that every area was inspected." });
+  for (const p of i.photos ? photoProblems(i.photos) : []) out.push({ step: "photos", ...p });
   return out;
 }

@@ -2,6 +2,7 @@ import "server-only";
 import { createHash } from "node:crypto";
 import { db } from "@/db";
 import * as q from "@/db/queries/inspections";
+import * as photoQ from "@/db/queries/photos";
 import { getOrgSettings } from "@/db/queries/organisations";
 import { getTank, getTankCatalogue, toCatalogue } from "@/db/queries/tanks";
 import { projectThresholdDate, unusedAnodeWarning } from "@/lib/calc/anodes";
@@ -14,7 +15,11 @@ import { AppError, databaseErrorCode } from "@/lib/errors";
 import { validateInput } from "@/lib/http/route";
 import { inspectionBlockers } from "@/lib/inspection/blockers";
 import { repairQuantities } from "@/lib/inspection/quantities";
+import { reportOrder } from "@/lib/photos/order";
+import { publicPhoto } from "@/lib/photos/public";
 import { judgeReading, ruleSet } from "@/lib/safety/atmosphere";
+import { photoCaptionSchema, ZPhotoOrderInput } from "@/lib/schemas/photo";
+import { deleteObjects } from "@/lib/storage/s3";
 import {
   findingInputSchema,
   notInspectedInputSchema,
@@ -75,6 +80,7 @@ async function buildView(orgId: string, inspectionId: string, vessel: { id: stri
   const corrosionTypes = new Set(["general_corrosion", "pitting", "grooving", "thickness_diminution"]);
   const tankCorrodes = b.findings.some((f) => corrosionTypes.has(f.type)) || coating.some((c) => c.rating.rating !== "GOOD");
   const volume = totalVolumeM3(b.sediment);
+  const photos = reportOrder(await photoQ.listPhotos({ orgId, inspectionId }));
   const editable = isInspector && (b.inspection.status === "draft" || b.inspection.status === "returned");
   return {
     inspection: b.inspection,
@@ -94,6 +100,7 @@ async function buildView(orgId: string, inspectionId: string, vessel: { id: stri
     anodeWarning: b.anodes ? unusedAnodeWarning({ meanWastagePct: b.anodes.meanWastagePct, appearUnused: b.anodes.appearUnused, tankCorrodes }) : null,
     sediment: { zones: b.sediment, totalM3: volume, cost: b.sedimentRate ? { ...removalCost(volume, b.sedimentRate), place: b.sedimentRate.place, ratePerM3: b.sedimentRate.amount } : null },
     notInspected: b.notInspected,
+    photos: photos.map(publicPhoto),
     blockers: inspectionBlockers({
       entry: b.entry ? { permitRef: b.entry.permitRef, standbyPerson: b.entry.standbyPerson, rescueEquipmentReady: b.entry.rescueEquipmentReady, ruleSet: b.entry.ruleSet } : null,
       readings: b.readings,
@@ -105,13 +112,14 @@ async function buildView(orgId: string, inspectionId: string, vessel: { id: stri
       noSediment: b.inspection.noSediment,
       notInspected: b.notInspected.length,
       allAreasInspected: b.inspection.allAreasInspected,
+      photos: { photos, findings: b.findings },
     }),
     editable,
   };
 }
 export type TInspectionView = Awaited<ReturnType<typeof buildView>>;
 
-export const SECTIONS = ["header", "entry", "coating", "anodes", "sediment", "not-inspected", "remarks", "findings-flag"] as const;
+export const SECTIONS = ["header", "entry", "coating", "anodes", "sediment", "not-inspected", "remarks", "findings-flag", "photo-order"] as const;
 export type TSection = (typeof SECTIONS)[number];
 
 const ZVersion = z.object({ version: z.number({ error: "is required: the version you read" }).int().positive() });
@@ -148,9 +156,36 @@ const WRITERS: Record<TSection, (c: TWriteCtx, body: unknown) => Promise<void>> 
   },
   remarks: async (c, body) => q.setFlags(c.tx, c, { remarks: validateInput(ZRemarksInput, body).doc }),
   "findings-flag": async (c, body) => q.setFlags(c.tx, c, { noFindings: validateInput(ZFindingsFlagInput, body).noFindings }),
+  "photo-order": async (c, body) => photoQ.setPhotoOrder(c.tx, c, validateInput(ZPhotoOrderInput, body).order),
 };
 
-type TMutation = { kind: "section"; section: TSection } | { kind: "finding"; findingId: string } | { kind: "delete-finding"; findingId: string } | { kind: "reading" };
+/** A caption that places the photo; the close-ups that name an overview must still fit inside it. */
+async function writePhotoCaption(c: TWriteCtx, photoId: string, body: unknown) {
+  const peers = await photoQ.listPhotoPeers(c.tx, c);
+  const self = peers.find((p) => p.id === photoId);
+  if (!self) throw new AppError("not_found", "No such photo.");
+  if (self.status === "awaiting_upload" || self.status === "rejected") throw new AppError("unprocessable", "This photo has not been accepted yet: wait for its upload to finish.");
+  const v = validateInput(photoCaptionSchema({ catalogue: c.catalogue, photoId, peers, findingIds: await photoQ.listFindingIds(c.tx, c) }), body);
+  const closeUps = peers.filter((p) => p.overviewPhotoId === photoId);
+  const misfits = closeUps.filter((p) => v.kind !== "overview" || p.frameFrom === null || p.frameTo === null || p.frameFrom < v.frameFrom || p.frameTo > v.frameTo);
+  if (misfits.length) {
+    throw new AppError("unprocessable", `${misfits.length} close-up${misfits.length > 1 ? "s name" : " names"} this overview and would no longer fit inside it: change ${misfits.length > 1 ? "them" : "it"} first.`, [
+      { path: v.kind !== "overview" ? "kind" : "frameFrom", message: "close-ups of this overview lie outside these frames" },
+    ]);
+  }
+  await photoQ.setPhotoCaption(c.tx, c, photoId, {
+    kind: v.kind, frameFrom: v.frameFrom, frameTo: v.frameTo, memberKind: v.memberKind, platingRegion: v.platingRegion ?? null, memberNumber: v.memberNumber ?? null,
+    findingId: v.findingId ?? null, overviewPhotoId: v.kind === "close_up" ? v.overviewPhotoId ?? null : null, caption: v.caption,
+  });
+}
+
+type TMutation =
+  | { kind: "section"; section: TSection }
+  | { kind: "finding"; findingId: string }
+  | { kind: "delete-finding"; findingId: string }
+  | { kind: "reading" }
+  | { kind: "photo"; photoId: string }
+  | { kind: "delete-photo"; photoId: string };
 
 /**
  * One write to an inspection: authorize (officer or master of the vessel),
@@ -174,6 +209,8 @@ export async function writeInspectionAs(actor: TActor, inspectionId: string, mut
   if (!tankId) throw new AppError("not_found", "No such inspection.");
   const tank = await getTank({ orgId, vesselId: auth.vessel.id, tankId });
   const catalogue = toCatalogue(tank!, await getTankCatalogue({ orgId, tankId: tank!.id }));
+  /** Files to remove from storage once the transaction has committed. */
+  let removedKeys: (string | null)[] = [];
   try {
     const result = await db().transaction(async (tx) => {
       const next = await q.claimVersion(tx, { orgId, inspectionId, version });
@@ -185,6 +222,11 @@ export async function writeInspectionAs(actor: TActor, inspectionId: string, mut
         await q.addReading(tx, c, { ...r, testedAt: new Date(r.testedAt), co2Pct: r.co2Pct ?? null, instrument: r.instrument ?? null });
       }
       if (mutation.kind === "delete-finding") await q.removeFinding(tx, c, mutation.findingId);
+      if (mutation.kind === "photo") await writePhotoCaption(c, mutation.photoId, body);
+      if (mutation.kind === "delete-photo") {
+        const row = await photoQ.removePhoto(tx, c, mutation.photoId);
+        removedKeys = [row.originalKey, row.reportKey, row.thumbKey];
+      }
       if (mutation.kind === "finding") {
         const f = validateInput(findingInputSchema(catalogue), body);
         const quantities = repairQuantities(f.repair as TRepair);
@@ -200,6 +242,7 @@ export async function writeInspectionAs(actor: TActor, inspectionId: string, mut
       if (idempotencyKey) await q.saveIdempotentResponse(tx, { userId: actor.userId, orgId, key: idempotencyKey, requestHash, status: 200, body: response });
       return response;
     });
+    if (removedKeys.length) await deleteObjects(removedKeys).catch((error) => console.error("[tankwright] removing a deleted photo's files failed", error));
     return { status: 200, body: result };
   } catch (error) {
     if (idempotencyKey && databaseErrorCode(error) === "23505") {

@@ -53,10 +53,12 @@ describe("environment", () => {
     expect(() => parseServerEnv({ AUTH_SECRET: "x".repeat(40) })).toThrow(/DATABASE_URL/);
     expect(() => parseServerEnv({ DATABASE_URL: "postgres://h/db", AUTH_SECRET: "short" })).toThrow(/AUTH_SECRET/);
     expect(() => parseServerEnv({ DATABASE_URL: "mysql://h/db", AUTH_SECRET: "x".repeat(40) })).toThrow(/DATABASE_URL/);
+    expect(() => parseServerEnv({ DATABASE_URL: "postgres://h/db", AUTH_SECRET: "x".repeat(40) })).toThrow(/S3_BUCKET/);
+    expect(() => parseServerEnv({ DATABASE_URL: "postgres://h/db", AUTH_SECRET: "x".repeat(40), S3_BUCKET: "b-1", S3_ENDPOINT: "not a url" })).toThrow(/S3_ENDPOINT/);
   });
 
   it("accepts next-auth's own variable names as well", () => {
-    const env = parseServerEnv({ DATABASE_URL: "postgres://h/db", NEXTAUTH_SECRET: "x".repeat(40), NEXTAUTH_URL: "http://127.0.0.1:3000" });
+    const env = parseServerEnv({ DATABASE_URL: "postgres://h/db", NEXTAUTH_SECRET: "x".repeat(40), NEXTAUTH_URL: "http://127.0.0.1:3000", S3_BUCKET: "tankwright" });
     expect(env.AUTH_SECRET).toHaveLength(40);
     expect(env.APP_URL).toBe("http://127.0.0.1:3000");
   });

@@ -6,6 +6,8 @@ import { Notice } from "@/components/ui/notice";
 import { PageHeader } from "@/components/ui/page-header";
 import { pageActor, pageAuthorize } from "@/lib/auth/page";
 import { InspectionList } from "@/components/inspections/inspection-list";
+import { DrawingList } from "@/components/vessels/drawing-list";
+import { listDrawingsAs } from "@/lib/services/drawings";
 import { canInspect, listInspectionsAs } from "@/lib/services/inspections";
 import { canEditStructure, readVesselTanks } from "@/lib/services/tanks";
 import { VESSEL_TYPE_LABELS } from "@/lib/vocabulary";
@@ -20,7 +22,7 @@ export default async function VesselPage({ params }: { params: Promise<{ vesselI
   const { vessel, tanks, roles } = await pageAuthorize(() => readVesselTanks(actor, vesselId));
   const canEdit = canEditStructure(roles);
   const mayInspect = canInspect(roles);
-  const inspections = await listInspectionsAs(actor, vesselId);
+  const [inspections, drawings] = await Promise.all([listInspectionsAs(actor, vesselId), listDrawingsAs(actor, vesselId)]);
   return (
     <>
       <PageHeader
@@ -47,6 +49,10 @@ export default async function VesselPage({ params }: { params: Promise<{ vesselI
       <section aria-labelledby="inspections-heading" className="mt-6">
         <h2 id="inspections-heading" className="mb-2 text-lg font-semibold text-hull-900">Inspections ({inspections.length})</h2>
         {inspections.length ? <InspectionList inspections={inspections} /> : <Notice>No inspection recorded yet.</Notice>}
+      </section>
+      <section aria-labelledby="drawings-heading" className="mt-6">
+        <h2 id="drawings-heading" className="mb-2 text-lg font-semibold text-hull-900">Drawings ({drawings.length})</h2>
+        <DrawingList vesselId={vesselId} canEdit={canEdit} drawings={drawings.map((d) => ({ ...d, createdAt: d.createdAt.toISOString() }))} />
       </section>
     </>
   );

@@ -11,7 +11,7 @@ export const metadata: Metadata = { title: "Pre-entry brief" };
 export default async function BriefPage({ params }: { params: Promise<{ vesselId: string; tankId: string }> }) {
   const { vesselId, tankId } = await params;
   const actor = await pageActor();
-  const { brief, profile, section } = await pageAuthorize(() => briefOf(actor, vesselId, tankId));
+  const { brief, profile, section, drawings } = await pageAuthorize(() => briefOf(actor, vesselId, tankId));
   return (
     <>
       <PageHeader
@@ -64,6 +64,14 @@ export default async function BriefPage({ params }: { params: Promise<{ vesselId
               <li key={f.number}><span className="font-semibold">#{f.number} {f.where}</span> — {f.what}. {f.lookAt}.</li>
             ))}
           </ul>
+        </section>
+        <section className="rounded-lg border border-slate-200 bg-white p-4">
+          <h2 className="mb-2 text-lg font-semibold text-hull-900">Drawings of the vessel</h2>
+          {drawings.length ? (
+            <ul className="list-disc pl-5 text-sm">{drawings.map((d) => <li key={d.url}>{d.kind}: <a href={d.url} target="_blank" rel="noreferrer" className="text-hull-800 underline">{d.title}</a></li>)}</ul>
+          ) : (
+            <p className="text-sm text-slate-600">No drawings uploaded for this vessel; they are added on the vessel&apos;s page.</p>
+          )}
         </section>
         <section className="rounded-lg border border-slate-200 bg-white p-4">
           <h2 className="mb-2 text-lg font-semibold text-hull-900">Before entry</h2>

@@ -1,0 +1,18 @@
+import "server-only";
+// Starts the workers of this app instance (JOBS_WORKER on): several instances
+// share the queue; each job is taken by one of them.
+import { serverEnv } from "@/lib/env";
+import { runPhotoVariants, type TPhotoVariantsJob } from "./photo-variants";
+import { jobQueue, QUEUES } from "./queue";
+import { runUploadsCleanup } from "./uploads-cleanup";
+
+export async function startWorkers() {
+  if (!serverEnv().JOBS_WORKER) return;
+  const boss = await jobQueue();
+  await boss.work<TPhotoVariantsJob>(QUEUES.photoVariants, { batchSize: 1, pollingIntervalSeconds: 1 }, async ([job]) => {
+    if (job) return runPhotoVariants(job.data);
+  });
+  await boss.work(QUEUES.uploadsCleanup, { batchSize: 1, pollingIntervalSeconds: 30 }, async () => runUploadsCleanup());
+  await boss.schedule(QUEUES.uploadsCleanup, "*/15 * * * *");
+  console.log("[tankwright] background workers started");
+}
