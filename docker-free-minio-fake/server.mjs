@@ -3,6 +3,7 @@
 // browser upload straight to it. Settings come from the environment (see README.md).
 import { mkdirSync } from "node:fs";
 import S3rver from "s3rver";
+import { presignedSignatureCheck } from "./presigned-check.mjs";
 
 const port = Number(process.env.S3_FAKE_PORT ?? 4569);
 const directory = process.env.S3_FAKE_DIR;
@@ -33,6 +34,8 @@ const server = new S3rver({
   silent: true,
   configureBuckets: [{ name: bucket, configs: [cors] }],
 });
+// Before s3rver's own middleware: refuse presigned URLs whose signature does not match.
+server.middleware.unshift(presignedSignatureCheck({ S3RVER: "S3RVER" }));
 await server.run();
 console.log(`local S3 store on http://127.0.0.1:${port}, bucket ${bucket}, files in ${directory}`);
 const stop = () => server.close().then(() => process.exit(0));
