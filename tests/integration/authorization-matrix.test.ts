@@ -128,6 +128,47 @@ const CASES: TCase[] = [
     body: () => ({ version: 1, type: "other", frameFrom: 85, frameTo: 85, memberKind: "manhole", description: "Manhole cover bolt missing, 1 of 24", repair: { kind: "monitor_only" } }),
     scopes: ["own", "sibling", "other"], expect: (w, sc) => inspector(w, sc, 409),
   },
+  { name: "GET /api/v1/inspections/:id/photos", path: (s, sc) => `${inspectionPath(s, sc)}/photos`, scopes: ["own", "sibling", "other"], expect: vesselReader },
+  {
+    name: "POST /api/v1/inspections/:id/photos", method: "POST", path: (s, sc) => `${inspectionPath(s, sc)}/photos`,
+    body: () => ({ id: crypto.randomUUID(), fileName: "matrix.jpg", contentType: "image/jpeg", sizeBytes: 1000 }),
+    scopes: ["own", "sibling", "other"], expect: (w, sc) => inspector(w, sc, 201),
+  },
+  {
+    name: "POST /api/v1/inspections/:id/photos/:photoId/complete (unknown photo)", method: "POST", path: (s, sc) => `${inspectionPath(s, sc)}/photos/${crypto.randomUUID()}/complete`,
+    scopes: ["own", "sibling", "other"], expect: (w, sc) => inspector(w, sc, 404),
+  },
+  {
+    name: "GET /api/v1/inspections/:id/photos/:photoId/file (unknown photo)", path: (s, sc) => `${inspectionPath(s, sc)}/photos/${crypto.randomUUID()}/file?variant=thumb`,
+    scopes: ["own", "sibling", "other"], expect: (w, sc) => (vesselReader(w, sc) === 200 ? 404 : vesselReader(w, sc)),
+  },
+  {
+    name: "PUT /api/v1/inspections/:id/photos/:photoId", method: "PUT", path: (s, sc) => `${inspectionPath(s, sc)}/photos/${crypto.randomUUID()}`,
+    body: () => ({ version: 1, kind: "overview", frameFrom: 85, frameTo: 90, memberKind: "manhole", caption: "Manhole at the aft end, cover and bolts" }),
+    scopes: ["own", "sibling", "other"], expect: (w, sc) => inspector(w, sc, 409),
+  },
+  {
+    name: "DELETE /api/v1/inspections/:id/photos/:photoId", method: "DELETE", path: (s, sc) => `${inspectionPath(s, sc)}/photos/${crypto.randomUUID()}`,
+    body: () => ({ version: 1 }), scopes: ["own", "sibling", "other"], expect: (w, sc) => inspector(w, sc, 409),
+  },
+  { name: "GET /api/v1/vessels/:id/drawings", path: (s, sc) => `/api/v1/vessels/${vesselOf(s, sc).id}/drawings`, scopes: ["own", "sibling", "other"], expect: vesselReader },
+  {
+    name: "POST /api/v1/vessels/:id/drawings", method: "POST", path: (s, sc) => `/api/v1/vessels/${vesselOf(s, sc).id}/drawings`,
+    body: () => ({ id: crypto.randomUUID(), kind: "general_arrangement", title: "Matrix general arrangement", fileName: "ga.pdf", contentType: "application/pdf", sizeBytes: 2000 }),
+    scopes: ["own", "sibling", "other"], expect: (w, sc) => (vesselEditor(w, sc) === 200 ? 201 : vesselEditor(w, sc)),
+  },
+  {
+    name: "POST /api/v1/vessels/:id/drawings/:drawingId/complete (unknown drawing)", method: "POST", path: (s, sc) => `/api/v1/vessels/${vesselOf(s, sc).id}/drawings/${crypto.randomUUID()}/complete`,
+    scopes: ["own", "sibling", "other"], expect: (w, sc) => (vesselEditor(w, sc) === 200 ? 404 : vesselEditor(w, sc)),
+  },
+  {
+    name: "GET /api/v1/vessels/:id/drawings/:drawingId/file (unknown drawing)", path: (s, sc) => `/api/v1/vessels/${vesselOf(s, sc).id}/drawings/${crypto.randomUUID()}/file`,
+    scopes: ["own", "sibling", "other"], expect: (w, sc) => (vesselReader(w, sc) === 200 ? 404 : vesselReader(w, sc)),
+  },
+  {
+    name: "DELETE /api/v1/vessels/:id/drawings/:drawingId (unknown drawing)", method: "DELETE", path: (s, sc) => `/api/v1/vessels/${vesselOf(s, sc).id}/drawings/${crypto.randomUUID()}`,
+    scopes: ["own", "sibling", "other"], expect: (w, sc) => (vesselEditor(w, sc) === 200 ? 404 : vesselEditor(w, sc)),
+  },
   { name: "page /inspections/:id", path: (s, sc) => `/inspections/${s.inspectionOf(vesselOf(s, sc).id)}`, scopes: ["own", "sibling", "other"], expect: (w, sc) => (w === "anonymous" ? 307 : vesselReader(w, sc)) },
   {
     name: "page /vessels/:id/inspections/new", path: (s, sc) => `/vessels/${vesselOf(s, sc).id}/inspections/new`, scopes: ["own", "sibling", "other"],
