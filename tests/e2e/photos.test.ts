@@ -16,7 +16,7 @@ let s: TScenario;
 let page: Page;
 
 const jpeg = (r: number, g: number, b: number) =>
-  sharp({ create: { width: 2400, height: 1800, channels: 3, noise: { type: "gaussian", mean: 120, sigma: 25 } } })
+  sharp({ create: { width: 2400, height: 1800, channels: 3, background: { r: 120, g: 120, b: 120 }, noise: { type: "gaussian", mean: 120, sigma: 25 } } })
     .composite([{ input: { create: { width: 1200, height: 900, channels: 3, background: { r, g, b } } }, left: 600, top: 450 }])
     .jpeg({ quality: 92 })
     .toBuffer();
