@@ -41,16 +41,22 @@ npx tsx scripts/migrate.ts
 
 rm -rf "$RESULTS"; mkdir -p "$RESULTS"
 FAILED_STAGES=()
+# For a developer: `npm test -- tests/e2e/photos` runs only the test files whose
+# path contains one of the given filters (every stage still starts).
+FILTERS=("$@")
+EXTRA=()
+[ ${#FILTERS[@]} -gt 0 ] && EXTRA=(--passWithNoTests "${FILTERS[@]}")
 run_project() {
   log "vitest: $1 tests"
-  npx vitest run --project "$1" --reporter=default --reporter=json --outputFile.json="$RESULTS/$1.json" || FAILED_STAGES+=("$1")
+  npx vitest run --project "$1" --reporter=default --reporter=json --outputFile.json="$RESULTS/$1.json" "${EXTRA[@]}" || FAILED_STAGES+=("$1")
 }
 
 run_project unit
 
 log "building the app for the integration and browser tests"
 require_free_port "$APP_PORT"
-if node_modules/.bin/next build >"$RESULTS/build.log" 2>&1; then
+# TANKWRIGHT_TEST_REUSE_BUILD=1 keeps an existing .next (a developer's shortcut; CI always builds).
+if { [ "${TANKWRIGHT_TEST_REUSE_BUILD:-}" = 1 ] && [ -f .next/BUILD_ID ]; } || node_modules/.bin/next build >"$RESULTS/build.log" 2>&1; then
   start_bg node_modules/.bin/next start -H 127.0.0.1 -p "$APP_PORT" >"$RESULTS/app.log" 2>&1; APP_PID=$BG_PID
   if wait_for_http "$APP_URL/sign-in" 90; then
     run_project integration

@@ -1,5 +1,6 @@
 import path from "node:path";
 import type { Browser, Page } from "playwright-core";
+import sharp from "sharp";
 import { afterAll, beforeAll, describe, expect, it } from "vitest";
 import { tankMembers } from "@/db/schema";
 import { COATING_AREA_LABELS, COATING_AREAS } from "@/lib/vocabulary";
@@ -118,8 +119,40 @@ describe("inspection wizard in Chromium (officer, tablet width)", () => {
     await page.keyboard.type("Tank ventilated for 24 hours before entry.");
     await w.waitSaved();
 
-    // A reload mid-way: everything is still there, from the server.
+    // A reload mid-way: everything is still there, from the server. The crack
+    // has no close-up yet, so the review names that as the one thing missing.
     await page.reload();
+    await w.goTo("Review");
+    await page.getByText("Photos: finding 1 needs at least one close-up photo that names it.").waitFor();
+
+    // An overview of the area and a close-up of the crack that names it.
+    await w.goTo("Photos");
+    const photo = (shade: number) => sharp({ create: { width: 1200, height: 900, channels: 3, background: { r: shade, g: 90, b: 70 } } }).jpeg().toBuffer();
+    await page.getByTestId("photo-files").setInputFiles([
+      { name: "overview.jpg", mimeType: "image/jpeg", buffer: await photo(150) },
+      { name: "crack.jpg", mimeType: "image/jpeg", buffer: await photo(60) },
+    ]);
+    const cards = page.getByTestId("photo-card");
+    await expect.poll(() => cards.locator("img").count(), { timeout: 30_000 }).toBe(2);
+    const caption = async (n: number, kind: string, from: string, to: string, text: string) => {
+      const card = cards.nth(n);
+      await card.getByLabel("Kind").selectOption(kind);
+      await card.getByLabel("From frame").fill(from);
+      await card.getByLabel("To frame").fill(to);
+      await card.getByLabel("Member", { exact: true }).selectOption("longitudinal");
+      await card.getByLabel("Plating region").selectOption("bottom_shell");
+      await card.getByLabel("Member number").fill("7");
+      await card.getByLabel("What it shows").fill(text);
+      return card;
+    };
+    await caption(0, "overview", "86", "90", "Bottom longitudinal 7 between the floors, looking forward");
+    await w.waitSaved();
+    const closeUp = await caption(1, "close_up", "88", "88", "Crack at the lower bracket toe of longitudinal 7");
+    await closeUp.getByLabel("Shows finding").selectOption({ index: 1 });
+    await expect.poll(() => closeUp.getByLabel("Overview of the same place").locator("option").count()).toBe(2);
+    await closeUp.getByLabel("Overview of the same place").selectOption({ index: 1 });
+    await w.waitSaved();
+
     await w.goTo("Review");
     await page.getByText("Ready to submit").waitFor();
     await expect(page.getByRole("listitem").filter({ hasText: "#1 Crack" }).textContent()).resolves.toMatch(/Fr\. 88 .*20\.1 kg/);
