@@ -8,9 +8,12 @@ set -e
 
 PG_PORT=${TANKWRIGHT_TEST_PG_PORT:-54339}
 APP_PORT=${TANKWRIGHT_TEST_APP_PORT:-3100}
-PG_DATA="$ROOT/.data/postgres-test"
-RESULTS="$ROOT/.data/test-results"
 S3_PORT=${TANKWRIGHT_TEST_S3_PORT:-4579}
+# Runs on other ports (a second engineer on the same checkout) keep their own folders.
+SUFFIX=""; [ "$PG_PORT" != 54339 ] && SUFFIX="-$PG_PORT"
+PG_DATA="$ROOT/.data/postgres-test$SUFFIX"
+RESULTS="$ROOT/.data/test-results$SUFFIX"
+S3_DATA="$ROOT/.data/s3-test$SUFFIX"
 APP_PID=""
 
 cleanup() {
@@ -33,8 +36,8 @@ export NEXTAUTH_SECRET="$AUTH_SECRET"
 export APP_URL="http://127.0.0.1:$APP_PORT" NEXTAUTH_URL="http://127.0.0.1:$APP_PORT"
 export TEST_BASE_URL="$APP_URL"
 # Throwaway objects: a fresh store folder every run.
-rm -rf "$ROOT/.data/s3-test"
-start_s3_fake "$ROOT/.data/s3-test" "$S3_PORT" "$APP_URL"
+rm -rf "$S3_DATA"
+start_s3_fake "$S3_DATA" "$S3_PORT" "$APP_URL"
 cd "$ROOT"
 log "applying migrations to the test database"
 npx tsx scripts/migrate.ts
