@@ -14,6 +14,9 @@ SUFFIX=""; [ "$PG_PORT" != 54339 ] && SUFFIX="-$PG_PORT"
 PG_DATA="$ROOT/.data/postgres-test$SUFFIX"
 RESULTS="$ROOT/.data/test-results$SUFFIX"
 S3_DATA="$ROOT/.data/s3-test$SUFFIX"
+# …and their own build folder, so that two builds never write into one .next.
+[ -n "$SUFFIX" ] && export TANKWRIGHT_DIST_DIR=".next-check$SUFFIX"
+DIST_DIR=${TANKWRIGHT_DIST_DIR:-.next}
 APP_PID=""
 
 cleanup() {
@@ -59,7 +62,7 @@ run_project unit
 log "building the app for the integration and browser tests"
 require_free_port "$APP_PORT"
 # TANKWRIGHT_TEST_REUSE_BUILD=1 keeps an existing .next (a developer's shortcut; CI always builds).
-if { [ "${TANKWRIGHT_TEST_REUSE_BUILD:-}" = 1 ] && [ -f .next/BUILD_ID ]; } || node_modules/.bin/next build >"$RESULTS/build.log" 2>&1; then
+if { [ "${TANKWRIGHT_TEST_REUSE_BUILD:-}" = 1 ] && [ -f "$DIST_DIR/BUILD_ID" ]; } || node_modules/.bin/next build >"$RESULTS/build.log" 2>&1; then
   start_bg node_modules/.bin/next start -H 127.0.0.1 -p "$APP_PORT" >"$RESULTS/app.log" 2>&1; APP_PID=$BG_PID
   if wait_for_http "$APP_URL/sign-in" 90; then
     run_project integration
