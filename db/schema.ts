@@ -688,6 +688,9 @@ export const emailDeliveries = pgTable(
     attempts: integer("attempts").notNull().default(0),
     lastError: text("last_error"),
     messageId: text("message_id"),
+    /** How the PDF went: "attachment", or "link" (a download link that expires) when it is over the size limit. */
+    method: text("method"),
+    linkExpiresAt: timestamp("link_expires_at", { withTimezone: true }),
     queuedBy: uuid("queued_by").references(() => users.id, { onDelete: "set null" }),
     sentAt: timestamp("sent_at", { withTimezone: true }),
     createdAt: createdAt(),

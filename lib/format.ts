@@ -20,3 +20,9 @@ export function formatDateTime(at: Date, offsetMinutes?: number | null): string 
   const text = `${shifted.slice(0, 10)} ${shifted.slice(11, 16)}`;
   return offsetMinutes === undefined || offsetMinutes === null ? `${text} UTC` : `${text} (${formatUtcOffset(offsetMinutes)})`;
 }
+
+/** The file name a report is saved and attached under: vessel, tank and revision, in characters every mail client accepts. */
+export function reportFileName(v: { vesselName: string; tankCode: string; revision: number; draft?: boolean }): string {
+  const clean = (s: string) => s.normalize("NFKD").replace(/[^A-Za-z0-9]+/g, "-").replace(/^-|-$/g, "");
+  return `TW-${clean(v.vesselName)}-${clean(v.tankCode)}-rev${v.revision}${v.draft ? "-draft" : ""}.pdf`;
+}

@@ -1,5 +1,5 @@
 import "server-only";
-import { and, asc, eq, inArray, lt, sql } from "drizzle-orm";
+import { and, asc, eq, inArray, lt, or, sql } from "drizzle-orm";
 import { db } from "@/db";
 import { findings, inspections, photos } from "@/db/schema";
 import { AppError } from "@/lib/errors";
@@ -161,7 +161,14 @@ export async function removePhoto(tx: TTx, { orgId, inspectionId }: TScope, phot
     .where(and(eq(photos.orgId, orgId), eq(photos.inspectionId, inspectionId), eq(photos.id, photoId)))
     .returning();
   if (!row) throw new AppError("not_found", "No such photo.");
-  return row;
+  // A later revision shares the files of the one it corrects: keep what another row still names.
+  const keys = [row.originalKey, row.reportKey, row.thumbKey].filter((k): k is string => Boolean(k));
+  const shared = keys.length
+    ? await tx.select({ o: photos.originalKey, r: photos.reportKey, t: photos.thumbKey }).from(photos)
+        .where(and(eq(photos.orgId, orgId), or(inArray(photos.originalKey, keys), inArray(photos.reportKey, keys), inArray(photos.thumbKey, keys))))
+    : [];
+  const stillNamed = new Set(shared.flatMap((x) => [x.o, x.r, x.t]));
+  return { ...row, unsharedKeys: keys.filter((k) => !stillNamed.has(k)) };
 }
 
 export async function setPhotoOrder(tx: TTx, { orgId, inspectionId }: TScope, order: readonly string[]) {

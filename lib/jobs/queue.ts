@@ -7,6 +7,8 @@ import { serverEnv } from "@/lib/env";
 export const QUEUES = {
   photoVariants: "photo-variants",
   uploadsCleanup: "uploads-cleanup",
+  reportRender: "report-render",
+  emailDelivery: "email-delivery",
 } as const;
 export type TQueue = (typeof QUEUES)[keyof typeof QUEUES];
 

@@ -225,7 +225,7 @@ export async function writeInspectionAs(actor: TActor, inspectionId: string, mut
       if (mutation.kind === "photo") await writePhotoCaption(c, mutation.photoId, body);
       if (mutation.kind === "delete-photo") {
         const row = await photoQ.removePhoto(tx, c, mutation.photoId);
-        removedKeys = [row.originalKey, row.reportKey, row.thumbKey];
+        removedKeys = row.unsharedKeys;
       }
       if (mutation.kind === "finding") {
         const f = validateInput(findingInputSchema(catalogue), body);

@@ -1,0 +1,16 @@
+import { NextResponse } from "next/server";
+import { requireActor } from "@/lib/auth/actor";
+import { route } from "@/lib/http/route";
+import { readSigningStateAs, signedReportUrlAs } from "@/lib/services/signing";
+
+type P = { inspectionId: string };
+
+/** The signed PDF (a short-lived link to storage), or with ?format=json its fingerprint and size. */
+export const GET = route<P>(async (req, { inspectionId }) => {
+  const actor = await requireActor();
+  if (new URL(req.url).searchParams.get("format") === "json") {
+    const state = await readSigningStateAs(actor, inspectionId);
+    return { report: state.report };
+  }
+  return NextResponse.redirect(await signedReportUrlAs(actor, inspectionId), 302);
+});

@@ -1,0 +1,2 @@
+ALTER TABLE "email_deliveries" ADD COLUMN "method" text;--> statement-breakpoint
+ALTER TABLE "email_deliveries" ADD COLUMN "link_expires_at" timestamp with time zone;
