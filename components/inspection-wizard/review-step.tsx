@@ -1,13 +1,15 @@
 "use client";
 
+import { SignForm } from "@/components/signing/sign-form";
 import { Notice } from "@/components/ui/notice";
 import { roundKg } from "@/lib/calc/steel";
 import { formatFrames } from "@/lib/structure/frames";
 import { COATING_AREA_LABELS, FINDING_TYPE_LABELS, MEMBER_KIND_LABELS, NOT_INSPECTED_REASON_LABELS, PHOTO_KIND_LABELS, REPAIR_KIND_LABELS } from "@/lib/vocabulary";
 import { RatingBadge } from "./rating-badge";
+import { useSync } from "./sync";
 import type { TView } from "./types";
 
-export function ReviewStep({ view, go }: { view: TView; go: (step: string, field?: string) => void }) {
+export function ReviewStep({ view, go, signerName }: { view: TView; go: (step: string, field?: string) => void; signerName?: string }) {
   const steel = view.findings.reduce((s, f) => s + (f.steelWeightKg ?? 0), 0);
   const coatingRepair = view.findings.reduce((s, f) => s + (f.coatingRepairM2 ?? 0), 0);
   return (
@@ -23,8 +25,9 @@ export function ReviewStep({ view, go }: { view: TView; go: (step: string, field
           </ul>
         </Notice>
       ) : (
-        <Notice tone="success" title="Ready to submit">Every step is complete. Submission and countersigning follow.</Notice>
+        <Notice tone="success" title="Ready to submit">Every step is complete. Read the summary below, then sign and submit it for the master&apos;s countersignature.</Notice>
       )}
+      {view.editable && !view.blockers.length && signerName !== undefined ? <SubmitWhenSaved view={view} signerName={signerName} /> : null}
       <section className="grid gap-3 rounded-lg border border-slate-200 bg-white p-4 sm:grid-cols-2">
         <p>Coating: {view.tankRating ? <><RatingBadge rating={view.tankRating.rating} /> — worst area {COATING_AREA_LABELS[view.tankRating.worstArea as keyof typeof COATING_AREA_LABELS]}: {view.tankRating.decidedBy}</> : "not rated yet"}</p>
         <p>Findings: {view.findings.length} · steel {roundKg(steel)} kg ({(steel / 1000).toFixed(3)} t) · coating repair {coatingRepair.toFixed(2)} m²</p>
@@ -64,4 +67,11 @@ export function ReviewStep({ view, go }: { view: TView; go: (step: string, field
       ) : null}
     </div>
   );
+}
+
+/** The officer signs only what the server holds: not while a change is still on its way. */
+function SubmitWhenSaved({ view, signerName }: { view: TView; signerName: string }) {
+  const sync = useSync();
+  if (sync.pending || sync.waiting || sync.conflict) return <Notice tone="info">Waiting for your last changes to be saved before you can sign.</Notice>;
+  return <SignForm inspectionId={view.inspection.id} action="submit" signerName={signerName} onDone={() => window.location.assign(`/inspections/${view.inspection.id}?step=review`)} />;
 }

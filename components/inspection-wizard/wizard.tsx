@@ -19,18 +19,18 @@ import { SedimentStep } from "./sediment-step";
 import { SyncProvider, useSync } from "./sync";
 import type { TView } from "./types";
 
-export function InspectionWizard({ initial, step }: { initial: TView; step: TStep }) {
+export function InspectionWizard({ initial, step, signerName }: { initial: TView; step: TStep; signerName?: string }) {
   const [client] = useState(() => new QueryClient({ defaultOptions: { queries: { staleTime: 5_000, refetchOnWindowFocus: true, retry: 3 } } }));
   return (
     <QueryClientProvider client={client}>
       <SyncProvider inspectionId={initial.inspection.id} initialVersion={initial.inspection.version}>
-        <WizardBody initial={initial} initialStep={step} />
+        <WizardBody initial={initial} initialStep={step} signerName={signerName} />
       </SyncProvider>
     </QueryClientProvider>
   );
 }
 
-function WizardBody({ initial, initialStep }: { initial: TView; initialStep: TStep }) {
+function WizardBody({ initial, initialStep, signerName }: { initial: TView; initialStep: TStep; signerName?: string }) {
   const id = initial.inspection.id;
   const query = useQuery<TView>({
     queryKey: ["inspection", id],
@@ -96,7 +96,7 @@ function WizardBody({ initial, initialStep }: { initial: TView; initialStep: TSt
         {step === "not-inspected" ? <NotInspectedStep view={view} /> : null}
         {step === "photos" ? <PhotosStep view={view} /> : null}
         {step === "remarks" ? <RemarksStep view={view} /> : null}
-        {step === "review" ? <ReviewStep view={view} go={go} /> : null}
+        {step === "review" ? <ReviewStep view={view} go={go} signerName={signerName} /> : null}
       </section>
       <div className="flex justify-between">
         <Button type="button" variant="secondary" disabled={index === 0} onClick={() => go(STEPS[index - 1]!.id)}>← Back</Button>

@@ -1,16 +1,26 @@
 import type { Metadata } from "next";
 import { InspectionWizard } from "@/components/inspection-wizard/wizard";
+import { SigningPanel } from "@/components/signing/signing-panel";
 import { pageActor, pageAuthorize } from "@/lib/auth/page";
 import { STEPS, type TStep } from "@/lib/inspection/blockers";
-import { readInspectionView } from "@/lib/services/inspections";
+import { canInspect, readInspectionView } from "@/lib/services/inspections";
+import { readSigningStateAs } from "@/lib/services/signing";
 
 export const metadata: Metadata = { title: "Inspection" };
 
 export default async function InspectionPage({ params, searchParams }: { params: Promise<{ inspectionId: string }>; searchParams: Promise<{ step?: string }> }) {
   const [{ inspectionId }, { step }] = await Promise.all([params, searchParams]);
   const actor = await pageActor();
-  const view = await pageAuthorize(() => readInspectionView(actor, inspectionId));
-  const first: TStep = STEPS.some((s) => s.id === step) ? (step as TStep) : "entry";
-  // The view crosses to the browser as JSON, as the API sends it.
-  return <InspectionWizard initial={JSON.parse(JSON.stringify(view))} step={first} />;
+  const [view, signing] = await pageAuthorize(() => Promise.all([readInspectionView(actor, inspectionId), readSigningStateAs(actor, inspectionId)]));
+  const first: TStep = STEPS.some((s) => s.id === step) ? (step as TStep) : view.inspection.status === "draft" ? "entry" : "review";
+  // Both cross to the browser as JSON, as the API sends them.
+  return (
+    <div className="space-y-4">
+      <SigningPanel
+        inspectionId={inspectionId} status={view.inspection.status} revision={view.inspection.revision}
+        state={JSON.parse(JSON.stringify(signing))} actor={{ userId: actor.userId, name: actor.name }}
+      />
+      <InspectionWizard initial={JSON.parse(JSON.stringify(view))} step={first} signerName={canInspect(signing.roles) ? actor.name : undefined} />
+    </div>
+  );
 }
