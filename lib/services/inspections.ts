@@ -65,7 +65,7 @@ export async function readInspectionView(actor: TActor, inspectionId: string) {
   return buildView(auth.orgId, inspectionId, auth.vessel, canInspect(auth.roles));
 }
 
-async function buildView(orgId: string, inspectionId: string, vessel: { id: string; name: string; imoNumber: string; utcOffsetMinutes: number | null }, isInspector: boolean) {
+export async function buildView(orgId: string, inspectionId: string, vessel: { id: string; name: string; imoNumber: string; utcOffsetMinutes: number | null }, isInspector: boolean) {
   const b = await q.getInspectionBundle({ orgId, inspectionId });
   if (!b) throw new AppError("not_found", "No such inspection.");
   const tank = await getTank({ orgId, vesselId: vessel.id, tankId: b.inspection.tankId });
