@@ -253,3 +253,5 @@ export const INSPECTION_STATUS_LABELS: Record<TInspectionStatus, string> = {
   countersigned: "Countersigned",
   superseded: "Superseded",
 };
+export type TRecipientKind = (typeof RECIPIENT_KINDS)[number];
+export const RECIPIENT_KIND_LABELS: Record<TRecipientKind, string> = { office: "Office", class: "Class society" };

@@ -85,6 +85,9 @@ export async function seedDemo(db: TDb): Promise<boolean> {
     await tx.insert(s.vesselRecipients).values([
       { orgId, vesselId: skerry.id, kind: "office", name: "Technical department", email: "technical@lantern-reach.test" },
       { orgId, vesselId: skerry.id, kind: "class", name: "Demo Class survey station", email: "survey@demo-class.test" },
+      { orgId, vesselId: halcyon.id, kind: "office", name: "Technical department", email: "technical@lantern-reach.test" },
+      { orgId, vesselId: halcyon.id, kind: "office", name: "Marine HSEQ", email: "hseq@lantern-reach.test" },
+      { orgId, vesselId: halcyon.id, kind: "class", name: "Demo Class survey station", email: "survey@demo-class.test" },
     ]);
   });
   return true;

@@ -45,6 +45,12 @@ const vesselReader = (who: TWho, scope: TScope) => {
 };
 /** Edit a vessel's particulars or structure map: whoever may read it (its officer and master, the office). */
 const vesselEditor = vesselReader;
+/** Keep a vessel's report recipients: the office; the vessel's officer and master only read them. */
+const recipientEditor = (ok: number) => (who: TWho, scope: TScope) => {
+  const read = vesselReader(who, scope);
+  if (read !== 200) return read;
+  return who === "superintendent" || who === "admin" ? ok : 403;
+};
 const adminOnly = (ok: number) => (who: TWho) => (who === "anonymous" ? 401 : who === "admin" ? ok : 403);
 const adminOnlyScoped = (ok: number) => (who: TWho, scope: TScope) =>
   who === "anonymous" ? 401 : who !== "admin" ? 403 : scope === "other" ? 404 : ok;
@@ -168,6 +174,20 @@ const CASES: TCase[] = [
   {
     name: "DELETE /api/v1/vessels/:id/drawings/:drawingId (unknown drawing)", method: "DELETE", path: (s, sc) => `/api/v1/vessels/${vesselOf(s, sc).id}/drawings/${crypto.randomUUID()}`,
     scopes: ["own", "sibling", "other"], expect: (w, sc) => (vesselEditor(w, sc) === 200 ? 404 : vesselEditor(w, sc)),
+  },
+  { name: "GET /api/v1/vessels/:id/recipients", path: (s, sc) => `/api/v1/vessels/${vesselOf(s, sc).id}/recipients`, scopes: ["own", "sibling", "other"], expect: vesselReader },
+  {
+    name: "POST /api/v1/vessels/:id/recipients", method: "POST", path: (s, sc) => `/api/v1/vessels/${vesselOf(s, sc).id}/recipients`,
+    body: (s) => ({ kind: "office", email: `matrix-${crypto.randomUUID().slice(0, 8)}-${s.run}@tests.tankwright.test` }),
+    scopes: ["own", "sibling", "other"], expect: recipientEditor(201),
+  },
+  {
+    name: "PUT /api/v1/vessels/:id/recipients/:recipientId (unknown recipient)", method: "PUT", path: (s, sc) => `/api/v1/vessels/${vesselOf(s, sc).id}/recipients/${crypto.randomUUID()}`,
+    body: () => ({ kind: "class", email: "matrix-class@tests.tankwright.test" }), scopes: ["own", "sibling", "other"], expect: recipientEditor(404),
+  },
+  {
+    name: "DELETE /api/v1/vessels/:id/recipients/:recipientId (unknown recipient)", method: "DELETE", path: (s, sc) => `/api/v1/vessels/${vesselOf(s, sc).id}/recipients/${crypto.randomUUID()}`,
+    scopes: ["own", "sibling", "other"], expect: recipientEditor(404),
   },
   { name: "page /inspections/:id", path: (s, sc) => `/inspections/${s.inspectionOf(vesselOf(s, sc).id)}`, scopes: ["own", "sibling", "other"], expect: (w, sc) => (w === "anonymous" ? 307 : vesselReader(w, sc)) },
   {

@@ -7,6 +7,8 @@ import { PageHeader } from "@/components/ui/page-header";
 import { pageActor, pageAuthorize } from "@/lib/auth/page";
 import { InspectionList } from "@/components/inspections/inspection-list";
 import { DrawingList } from "@/components/vessels/drawing-list";
+import { RecipientList } from "@/components/vessels/recipient-list";
+import { listRecipientsAs } from "@/lib/services/recipients";
 import { listDrawingsAs } from "@/lib/services/drawings";
 import { canInspect, listInspectionsAs } from "@/lib/services/inspections";
 import { canEditStructure, readVesselTanks } from "@/lib/services/tanks";
@@ -54,6 +56,7 @@ export default async function VesselPage({ params }: { params: Promise<{ vesselI
         <h2 id="drawings-heading" className="mb-2 text-lg font-semibold text-hull-900">Drawings ({drawings.length})</h2>
         <DrawingList vesselId={vesselId} canEdit={canEdit} drawings={drawings.map((d) => ({ ...d, createdAt: d.createdAt.toISOString() }))} />
       </section>
+      <RecipientList vesselId={vesselId} {...await listRecipientsAs(actor, vesselId)} />
     </>
   );
 }
