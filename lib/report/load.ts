@@ -34,10 +34,10 @@ async function mapLimited<T, R>(items: readonly T[], lanes: number, work: (item:
 }
 
 /**
- * The report of an inspection as it stands now. `images: false` leaves the
- * photo and signature bytes out (the HTML preview loads photos by URL).
+ * The report of an inspection as it stands now. `photoBytes: false` leaves the
+ * photos' bytes in storage (the HTML preview loads them by URL).
  */
-export async function loadReportData({ orgId, inspectionId, images = true }: { orgId: string; inspectionId: string; images?: boolean }): Promise<TReportData> {
+export async function loadReportData({ orgId, inspectionId, photoBytes = true }: { orgId: string; inspectionId: string; photoBytes?: boolean }): Promise<TReportData> {
   const row = await getInspectionForRender({ orgId, inspectionId });
   if (!row) throw new AppError("not_found", "No such inspection.");
   const vessel = await getVessel({ orgId, vesselId: row.vesselId });
@@ -50,8 +50,8 @@ export async function loadReportData({ orgId, inspectionId, images = true }: { o
   ]);
   const reportKeys = new Map(photoRows.map((p) => [p.id, p.reportKey]));
   const ready = view.photos.filter((p) => p.status === "ready" && reportKeys.get(p.id));
-  const jpegs = images ? await mapLimited(ready, READ_LANES, (p) => readObject(reportKeys.get(p.id)!, MAX_PHOTO_BYTES)) : ready.map(() => null);
-  const drawn = await Promise.all(signatureRows.map((s) => (images && s.drawnSignatureKey ? readObject(s.drawnSignatureKey, MAX_SIGNATURE_BYTES) : null)));
+  const jpegs = photoBytes ? await mapLimited(ready, READ_LANES, (p) => readObject(reportKeys.get(p.id)!, MAX_PHOTO_BYTES)) : ready.map(() => null);
+  const drawn = await Promise.all(signatureRows.map((s) => (s.drawnSignatureKey ? readObject(s.drawnSignatureKey, MAX_SIGNATURE_BYTES) : null)));
   const cost = view.sediment.cost;
   const source: TReportSource = {
     company: org?.name ?? "",
@@ -81,7 +81,7 @@ export async function loadReportData({ orgId, inspectionId, images = true }: { o
 }
 
 /** The report for someone who may read the vessel's reports (its officer and master, the office). */
-export async function loadReportDataAs(actor: TActor, inspectionId: string, opts: { images?: boolean } = {}) {
+export async function loadReportDataAs(actor: TActor, inspectionId: string, opts: { photoBytes?: boolean } = {}) {
   const auth = await authorizeInspection({ actor, inspectionId, allow: VESSEL_READERS });
-  return loadReportData({ orgId: auth.orgId, inspectionId, images: opts.images });
+  return loadReportData({ orgId: auth.orgId, inspectionId, photoBytes: opts.photoBytes });
 }
