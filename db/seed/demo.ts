@@ -5,6 +5,7 @@ import { eq } from "drizzle-orm";
 import type { TDb } from "../client";
 import * as s from "../schema";
 import { insertMembership, insertOrganisation, insertTank, insertUser, insertVessel } from "./builders";
+import { fillInspection } from "./complete-inspection";
 
 export const DEMO_ORG_SLUG = "lantern-reach";
 export const DEMO_PASSWORD = "tankwright-demo";
@@ -89,6 +90,14 @@ export async function seedDemo(db: TDb): Promise<boolean> {
       { orgId, vesselId: halcyon.id, kind: "office", name: "Marine HSEQ", email: "hseq@lantern-reach.test" },
       { orgId, vesselId: halcyon.id, kind: "class", name: "Demo Class survey station", email: "survey@demo-class.test" },
     ]);
+
+    // An inspection with every step complete, ready for the officer to sign and the master to countersign.
+    const tank = await tx.query.tanks.findFirst({ where: (t, { and, eq: is }) => and(is(t.vesselId, skerry.id), is(t.code, "No. 3 DB WBT P")) });
+    const [ready] = await tx.insert(s.inspections).values({
+      orgId, vesselId: skerry.id, tankId: tank!.id, inspectedOn: "2026-11-28", placeKind: "port", place: "Port Averly, berth 6",
+      team: ["Maren Oduya, Chief Officer", "Pell Arkady, Bosun"], createdBy: users.officer!,
+    }).returning();
+    await fillInspection(tx, { orgId, inspectionId: ready!.id, frameFrom: tank!.frameFrom, testedAt: new Date("2026-11-28T00:45:00Z"), measuredBy: "Maren Oduya", standbyPerson: "Pell Arkady, Bosun" });
   });
   return true;
 }

@@ -34,14 +34,14 @@ async function confirmPassword(actor: TActor, password: string) {
 /** Everything that must hold before a report can be signed: no blockers, and the version the signer read. */
 async function readForSigning(actor: TActor, inspectionId: string, version: number) {
   const view = await readInspectionView(actor, inspectionId);
+  if (view.blockers.length) {
+    throw new AppError("unprocessable", `The report cannot be signed yet: ${view.blockers.length} thing${view.blockers.length > 1 ? "s are" : " is"} missing.`,
+      view.blockers.map((b) => ({ path: `${b.step}.${b.field}`, message: b.message })));
+  }
   if (view.inspection.version !== version) {
     throw new AppError("conflict", "Someone else saved this inspection since you opened it. Reload it and read it again before signing.", [
       { path: "version", message: String(view.inspection.version) },
     ]);
-  }
-  if (view.blockers.length) {
-    throw new AppError("unprocessable", `The report cannot be signed yet: ${view.blockers.length} thing${view.blockers.length > 1 ? "s are" : " is"} missing.`,
-      view.blockers.map((b) => ({ path: `${b.step}.${b.field}`, message: b.message })));
   }
   return view;
 }

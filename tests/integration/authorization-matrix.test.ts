@@ -33,6 +33,12 @@ const inspector = (who: TWho, scope: TScope, ok: number) => {
   if (read !== 200) return read;
   return who === "officer" || who === "master" ? ok : 403;
 };
+/** Countersign or return a report: the vessel's master only. */
+const countersigner = (who: TWho, scope: TScope, ok: number) => {
+  const read = vesselReader(who, scope);
+  if (read !== 200) return read;
+  return who === "master" ? ok : 403;
+};
 let memberSerial = 0;
 let frameSerial = 0;
 
@@ -157,6 +163,42 @@ const CASES: TCase[] = [
     name: "DELETE /api/v1/inspections/:id/photos/:photoId", method: "DELETE", path: (s, sc) => `${inspectionPath(s, sc)}/photos/${crypto.randomUUID()}`,
     body: () => ({ version: 1 }), scopes: ["own", "sibling", "other"], expect: (w, sc) => inspector(w, sc, 409),
   },
+  // Signing: the scenario's inspections are drafts with blockers, so a permitted signature is refused with 422.
+  {
+    name: "POST /api/v1/inspections/:id/submit", method: "POST", path: (s, sc) => `${inspectionPath(s, sc)}/submit`,
+    body: () => ({ version: 1, password: PASSWORD, typedSignature: "Matrix signer" }),
+    scopes: ["own", "sibling", "other"], expect: (w, sc) => inspector(w, sc, 422),
+  },
+  {
+    name: "POST /api/v1/inspections/:id/countersign", method: "POST", path: (s, sc) => `${inspectionPath(s, sc)}/countersign`,
+    body: () => ({ version: 1, password: PASSWORD, typedSignature: "Matrix signer" }),
+    scopes: ["own", "sibling", "other"], expect: (w, sc) => countersigner(w, sc, 422),
+  },
+  {
+    name: "POST /api/v1/inspections/:id/return", method: "POST", path: (s, sc) => `${inspectionPath(s, sc)}/return`,
+    body: () => ({ version: 1, comments: "Matrix: a return of a draft is refused." }),
+    scopes: ["own", "sibling", "other"], expect: (w, sc) => countersigner(w, sc, 409),
+  },
+  { name: "GET /api/v1/inspections/:id/signatures", path: (s, sc) => `${inspectionPath(s, sc)}/signatures`, scopes: ["own", "sibling", "other"], expect: vesselReader },
+  { name: "GET /api/v1/inspections/:id/revisions", path: (s, sc) => `${inspectionPath(s, sc)}/revisions`, scopes: ["own", "sibling", "other"], expect: vesselReader },
+  {
+    name: "POST /api/v1/inspections/:id/revisions (of a draft)", method: "POST", path: (s, sc) => `${inspectionPath(s, sc)}/revisions`,
+    scopes: ["own", "sibling", "other"], expect: (w, sc) => inspector(w, sc, 409),
+  },
+  {
+    name: "GET /api/v1/inspections/:id/signed-report (not signed yet)", path: (s, sc) => `${inspectionPath(s, sc)}/signed-report`,
+    scopes: ["own", "sibling", "other"], expect: (w, sc) => (vesselReader(w, sc) === 200 ? 404 : vesselReader(w, sc)),
+  },
+  { name: "GET /api/v1/inspections/:id/deliveries", path: (s, sc) => `${inspectionPath(s, sc)}/deliveries`, scopes: ["own", "sibling", "other"], expect: vesselReader },
+  { name: "GET /api/v1/inspections/:id/report (draft PDF)", path: (s, sc) => `${inspectionPath(s, sc)}/report`, scopes: ["own", "sibling", "other"], expect: vesselReader },
+  {
+    name: "POST /api/v1/deliveries/:id/resend (unknown delivery)", method: "POST", path: () => `/api/v1/deliveries/${crypto.randomUUID()}/resend`,
+    scopes: ["own"], expect: (w) => (w === "anonymous" ? 401 : 404),
+  },
+  {
+    name: "POST /api/v1/verify (open to anyone)", method: "POST", path: () => "/api/v1/verify",
+    body: () => ({ fingerprint: "0".repeat(64) }), scopes: ["own"], expect: () => 200,
+  },
   { name: "GET /api/v1/vessels/:id/drawings", path: (s, sc) => `/api/v1/vessels/${vesselOf(s, sc).id}/drawings`, scopes: ["own", "sibling", "other"], expect: vesselReader },
   {
     name: "POST /api/v1/vessels/:id/drawings", method: "POST", path: (s, sc) => `/api/v1/vessels/${vesselOf(s, sc).id}/drawings`,
@@ -190,6 +232,7 @@ const CASES: TCase[] = [
     scopes: ["own", "sibling", "other"], expect: recipientEditor(404),
   },
   { name: "page /inspections/:id", path: (s, sc) => `/inspections/${s.inspectionOf(vesselOf(s, sc).id)}`, scopes: ["own", "sibling", "other"], expect: (w, sc) => (w === "anonymous" ? 307 : vesselReader(w, sc)) },
+  { name: "page /inspections/:id/report", path: (s, sc) => `/inspections/${s.inspectionOf(vesselOf(s, sc).id)}/report`, scopes: ["own", "sibling", "other"], expect: (w, sc) => (w === "anonymous" ? 307 : vesselReader(w, sc)) },
   {
     name: "page /vessels/:id/inspections/new", path: (s, sc) => `/vessels/${vesselOf(s, sc).id}/inspections/new`, scopes: ["own", "sibling", "other"],
     expect: (w, sc) => (w === "anonymous" ? 307 : inspector(w, sc, 200) === 403 ? 404 : inspector(w, sc, 200)),
