@@ -14,7 +14,7 @@ export function ReviewStep({ view, go, signerName }: { view: TView; go: (step: s
   const coatingRepair = view.findings.reduce((s, f) => s + (f.coatingRepairM2 ?? 0), 0);
   return (
     <div className="space-y-5">
-      {view.blockers.length ? (
+      {!view.editable ? null : view.blockers.length ? (
         <Notice tone="error" title={`${view.blockers.length} thing${view.blockers.length > 1 ? "s" : ""} to complete before the report can be submitted`}>
           <ul className="list-disc pl-5">
             {view.blockers.map((b) => (

@@ -51,18 +51,31 @@ function WizardBody({ initial, initialStep, signerName }: { initial: TView; init
   const blockersOf = (s: TStep) => view.blockers.filter((b) => b.step === s).length;
   const index = STEPS.findIndex((s) => s.id === step);
 
+  const header = (
+    <div>
+      <h1 className="text-2xl font-bold text-hull-900">{view.tank.code} · {view.inspection.inspectedOn}</h1>
+      <p className="text-sm text-slate-600">
+        {view.vessel.name} · {view.tank.name} · {formatFrames(view.tank.frameFrom, view.tank.frameTo)} · {PLACE_KIND_LABELS[view.inspection.placeKind]}, {view.inspection.place} · team {view.inspection.team.join(", ")} · revision {view.inspection.revision} · {INSPECTION_STATUS_LABELS[view.inspection.status]}
+      </p>
+    </div>
+  );
   if (!view.editable) {
-    return <Notice tone="info" title={`This inspection is ${INSPECTION_STATUS_LABELS[view.inspection.status].toLowerCase()}`}>Only the vessel&apos;s officers and master edit a draft; {view.inspection.status === "draft" || view.inspection.status === "returned" ? "you can read it on the review step." : "a correction is a new revision."}<ReviewStep view={view} go={() => undefined} /></Notice>;
+    const draft = view.inspection.status === "draft" || view.inspection.status === "returned";
+    return (
+      <div className="space-y-4">
+        <header>{header}</header>
+        <Notice tone="info" title={`This inspection is ${INSPECTION_STATUS_LABELS[view.inspection.status].toLowerCase()}`}>
+          {draft ? "Only the vessel's officers and master edit a draft; you can read it here." : view.inspection.status === "submitted" ? "It is locked while the master reads it: it is countersigned, or returned to the officer with comments." : "It is locked: a correction is a new revision."}{" "}
+          <a className="underline" href={`/inspections/${view.inspection.id}/report`}>Read the whole report</a>
+        </Notice>
+        <ReviewStep view={view} go={() => undefined} />
+      </div>
+    );
   }
   return (
     <div className="space-y-4">
       <header className="flex flex-wrap items-start justify-between gap-3">
-        <div>
-          <h1 className="text-2xl font-bold text-hull-900">{view.tank.code} · {view.inspection.inspectedOn}</h1>
-          <p className="text-sm text-slate-600">
-            {view.vessel.name} · {view.tank.name} · {formatFrames(view.tank.frameFrom, view.tank.frameTo)} · {PLACE_KIND_LABELS[view.inspection.placeKind]}, {view.inspection.place} · team {view.inspection.team.join(", ")} · {INSPECTION_STATUS_LABELS[view.inspection.status]}
-          </p>
-        </div>
+        {header}
         <SaveStatus />
       </header>
       <ConflictPanel view={view} />

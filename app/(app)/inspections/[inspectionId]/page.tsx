@@ -20,7 +20,7 @@ export default async function InspectionPage({ params, searchParams }: { params:
         inspectionId={inspectionId} status={view.inspection.status} revision={view.inspection.revision}
         state={JSON.parse(JSON.stringify(signing))} actor={{ userId: actor.userId, name: actor.name }}
       />
-      <InspectionWizard initial={JSON.parse(JSON.stringify(view))} step={first} signerName={canInspect(signing.roles) ? actor.name : undefined} />
+      <InspectionWizard key={`${view.inspection.status}-${view.inspection.revision}`} initial={JSON.parse(JSON.stringify(view))} step={first} signerName={canInspect(signing.roles) ? actor.name : undefined} />
     </div>
   );
 }
