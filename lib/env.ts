@@ -22,6 +22,10 @@ const ZServerEnv = z.object({
   JOBS_WORKER: z.stringbool().default(true),
   SMTP_URL: z.url({ protocol: /^smtps?$/, error: "must be an smtp:// or smtps:// URL" }).optional(),
   MAIL_FROM: z.string().min(3).default("Tankwright <reports@tankwright.test>"),
+  /** A signed report larger than this goes out as a download link instead of an attachment. */
+  MAIL_ATTACHMENT_LIMIT_BYTES: z.coerce.number().int().min(1024, "must be at least 1024 bytes").default(10 * 1024 * 1024),
+  /** How long a report download link in an e-mail works: at most 7 days, the longest a presigned S3 URL lasts. */
+  REPORT_LINK_TTL_SECONDS: z.coerce.number().int().min(60, "must be at least 60 seconds").max(604800, "must be at most 604800 (7 days, the presigned URL maximum)").default(604800),
 });
 export type TServerEnv = z.infer<typeof ZServerEnv>;
 

@@ -124,10 +124,11 @@ wait_for_http() {
   done
 }
 
-# Fails when something already answers on the port (an old server would hide ours).
+# require_free_port PORT [VARIABLE]: fails when something already answers on the port
+# (an old server would hide ours); the message names the variable that moves it.
 require_free_port() {
   if node -e 'const s=require("net").connect(+process.argv[1],"127.0.0.1");s.on("connect",()=>process.exit(0));s.on("error",()=>process.exit(1))' "$1"; then
-    die "port $1 is already in use; stop what is running there (or set PORT) and try again"
+    die "port $1 is already in use; stop what is running there (or set ${2:-PORT}) and try again"
   fi
 }
 
@@ -152,6 +153,31 @@ start_s3_fake() {
   local deadline=$((SECONDS + 30))
   until node -e 'const s=require("net").connect(+process.argv[1],"127.0.0.1");s.on("connect",()=>process.exit(0));s.on("error",()=>process.exit(1))' "$port"; do
     [ $SECONDS -lt $deadline ] || die "the local S3 store did not start on port $port"
+    sleep 0.2
+  done
+}
+
+# start_mail_catcher DIR SMTP_PORT WEB_PORT [SMTP_PORT_VARIABLE WEB_PORT_VARIABLE]: the local
+# mail catcher (maildev), unless SMTP_URL points at a real service. Both ports bound to
+# 127.0.0.1 only; messages are kept in DIR (its own per catcher: clearing one must not
+# empty another). Exports SMTP_URL and MAILDEV_WEB_URL; sets MAIL_PID.
+MAIL_PID=""
+smtp_url_without_password() { printf '%s' "${SMTP_URL:-}" | sed -E 's#//[^@/]*@#//#'; }
+start_mail_catcher() {
+  local dir=$1 smtp_port=$2 web_port=$3
+  if [ -n "${SMTP_URL:-}" ]; then log "sending e-mail through SMTP_URL ($(smtp_url_without_password))"; return; fi
+  require_free_port "$smtp_port" "${4:-the mail catcher's SMTP port}"
+  require_free_port "$web_port" "${5:-the mail catcher's web port}"
+  mkdir -p "$dir"
+  log "starting the local mail catcher: SMTP 127.0.0.1:$smtp_port, web http://127.0.0.1:$web_port"
+  start_bg "$ROOT/node_modules/.bin/maildev" --ip 127.0.0.1 --web-ip 127.0.0.1 \
+    --smtp "$smtp_port" --web "$web_port" --mail-directory "$dir" --silent
+  MAIL_PID=$BG_PID
+  export SMTP_URL="smtp://127.0.0.1:$smtp_port" MAILDEV_WEB_URL="http://127.0.0.1:$web_port"
+  local deadline=$((SECONDS + 30))
+  until node -e 'fetch(process.argv[1]).then(r=>process.exit(r.ok?0:1),()=>process.exit(1))' "$MAILDEV_WEB_URL/api/healthz" \
+    && node -e 'const s=require("net").connect(+process.argv[1],"127.0.0.1");s.on("connect",()=>process.exit(0));s.on("error",()=>process.exit(1))' "$smtp_port"; do
+    [ $SECONDS -lt $deadline ] || die "the local mail catcher did not start on ports $smtp_port / $web_port"
     sleep 0.2
   done
 }

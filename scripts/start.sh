@@ -10,6 +10,8 @@ PG_PORT=${TANKWRIGHT_PG_PORT:-54329}
 APP_PORT=${PORT:-3000}
 PG_DATA="$ROOT/.data/postgres"
 S3_PORT=${TANKWRIGHT_S3_PORT:-4569}
+MAIL_SMTP_PORT=${TANKWRIGHT_MAIL_SMTP_PORT:-1025}
+MAIL_WEB_PORT=${TANKWRIGHT_MAIL_WEB_PORT:-1080}
 PIDS=()
 
 cleanup() {
@@ -31,6 +33,10 @@ ensure_auth_secret
 export APP_URL="${APP_URL:-http://127.0.0.1:$APP_PORT}" NEXTAUTH_URL="${NEXTAUTH_URL:-${APP_URL:-http://127.0.0.1:$APP_PORT}}"
 start_s3_fake "$ROOT/.data/s3" "$S3_PORT" "$APP_URL,http://localhost:$APP_PORT"
 [ -n "$S3_PID" ] && PIDS+=("$S3_PID")
+start_mail_catcher "$ROOT/.data/mail" "$MAIL_SMTP_PORT" "$MAIL_WEB_PORT" TANKWRIGHT_MAIL_SMTP_PORT TANKWRIGHT_MAIL_WEB_PORT
+[ -n "$MAIL_PID" ] && PIDS+=("$MAIL_PID")
+MAIL_LINE="E-mail (reports, password resets): sent through $(smtp_url_without_password)"
+[ -n "$MAIL_PID" ] && MAIL_LINE="E-mail is caught, not sent: read it at $MAILDEV_WEB_URL (SMTP ${SMTP_URL#smtp://})"
 
 log "applying migrations"
 (cd "$ROOT" && npx tsx scripts/migrate.ts)
@@ -61,9 +67,10 @@ cat <<MSG
     admin@tankwright.test       company administrator
 
   Photos, drawings and PDFs: ${S3_ENDPOINT:-AWS S3}, bucket $S3_BUCKET
+  $MAIL_LINE
   Background jobs (photo variants, clean-up) run inside the app (JOBS_WORKER).
 
-  Ctrl-C stops the app${S3_PID:+, the local S3 store}${OWN_PG:+ and PostgreSQL}.
+  Ctrl-C stops the app${S3_PID:+, the local S3 store}${MAIL_PID:+, the mail catcher}${OWN_PG:+ and PostgreSQL}.
 
 MSG
 wait "${PIDS[@]}"

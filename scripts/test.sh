@@ -9,11 +9,14 @@ set -e
 PG_PORT=${TANKWRIGHT_TEST_PG_PORT:-54339}
 APP_PORT=${TANKWRIGHT_TEST_APP_PORT:-3100}
 S3_PORT=${TANKWRIGHT_TEST_S3_PORT:-4579}
+MAIL_SMTP_PORT=${TANKWRIGHT_TEST_MAIL_SMTP_PORT:-1035}
+MAIL_WEB_PORT=${TANKWRIGHT_TEST_MAIL_WEB_PORT:-1090}
 # Runs on other ports (a second engineer on the same checkout) keep their own folders.
 SUFFIX=""; [ "$PG_PORT" != 54339 ] && SUFFIX="-$PG_PORT"
 PG_DATA="$ROOT/.data/postgres-test$SUFFIX"
 RESULTS="$ROOT/.data/test-results$SUFFIX"
 S3_DATA="$ROOT/.data/s3-test$SUFFIX"
+MAIL_DATA="$ROOT/.data/mail-test$SUFFIX"
 # …and their own build folder, so that two builds never write into one .next.
 [ -n "$SUFFIX" ] && export TANKWRIGHT_DIST_DIR=".next-check$SUFFIX"
 DIST_DIR=${TANKWRIGHT_DIST_DIR:-.next}
@@ -23,6 +26,7 @@ cleanup() {
   trap - INT TERM EXIT
   stop_bg "$APP_PID"
   stop_bg "$S3_PID"
+  stop_bg "$MAIL_PID"
   wait 2>/dev/null || true
   [ -n "${PG_BIN:-}" ] && stop_cluster "$PG_DATA"
 }
@@ -41,6 +45,10 @@ export TEST_BASE_URL="$APP_URL"
 # Throwaway objects: a fresh store folder every run.
 rm -rf "$S3_DATA"
 start_s3_fake "$S3_DATA" "$S3_PORT" "$APP_URL"
+# The tests read what the app sends from the catcher: always a fresh one, whatever SMTP_URL says.
+unset SMTP_URL
+rm -rf "$MAIL_DATA"
+start_mail_catcher "$MAIL_DATA" "$MAIL_SMTP_PORT" "$MAIL_WEB_PORT" TANKWRIGHT_TEST_MAIL_SMTP_PORT TANKWRIGHT_TEST_MAIL_WEB_PORT
 cd "$ROOT"
 log "applying migrations to the test database"
 npx tsx scripts/migrate.ts
