@@ -18,12 +18,15 @@ export const ZMembershipInput = z
   });
 export type TMembershipInput = z.infer<typeof ZMembershipInput>;
 
+/** The rule for every password a person chooses (new account, reset). */
+export const ZNewPassword = z.string({ error: "is required" }).min(12, "needs at least 12 characters").max(200, "may have at most 200 characters");
+
 export const ZUserInput = z
   .object({
     email: z.email("must be an e-mail address").trim().toLowerCase().max(320),
     name: z.string({ error: "is required" }).trim().min(2, "needs at least 2 characters").max(120),
     rank: optionalText(60),
-    password: z.string({ error: "is required" }).min(12, "needs at least 12 characters").max(200),
+    password: ZNewPassword,
   })
   .and(ZMembershipInput);
 export type TUserInput = z.infer<typeof ZUserInput>;

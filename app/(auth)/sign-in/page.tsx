@@ -1,4 +1,5 @@
 import type { Metadata } from "next";
+import Link from "next/link";
 import { redirect } from "next/navigation";
 import { SignInForm } from "@/components/auth/sign-in-form";
 import { getActor } from "@/lib/auth/actor";
@@ -20,6 +21,9 @@ export default async function SignInPage({ searchParams }: { searchParams: Promi
         <h1 className="mb-1 mt-2 text-2xl font-bold text-hull-900">Sign in</h1>
         <p className="mb-6 text-sm text-slate-600">Ballast tank inspections for the ship, the master, the office and class.</p>
         <SignInForm callbackUrl={callbackUrl} refused={SIGN_IN_REFUSED} />
+        <p className="mt-6 text-center text-sm">
+          <Link href="/forgot-password" className="text-hull-700 underline">Forgot your password?</Link>
+        </p>
       </div>
     </main>
   );
