@@ -53,6 +53,9 @@ const s = StyleSheet.create({
   typed: { fontSize: 16, fontStyle: "italic", fontFamily: "Noto Sans", color: NAVY },
 });
 
+/** The bytes as a Buffer without copying them; React-PDF reads a Buffer source as it is (no cache key made from it). */
+const bytes = (b: Uint8Array) => (Buffer.isBuffer(b) ? b : Buffer.from(b.buffer, b.byteOffset, b.byteLength));
+
 type TColumn<T> = { title: string; width: number | "flex"; cell: (row: T) => ReactNode };
 
 function Table<T>({ columns, rows, rowKey }: { columns: TColumn<T>[]; rows: T[]; rowKey: (row: T, i: number) => string }) {
@@ -116,7 +119,7 @@ function Signature({ sig }: { sig: TReportSignature }) {
       <Text style={s.signatureRole}>{sig.role}</Text>
       <View style={s.signatureMark}>
         {sig.drawnPng ? (
-          <Image src={{ data: Buffer.from(sig.drawnPng), format: "png" }} style={{ height: 42, objectFit: "contain", objectPosition: "left" }} />
+          <Image src={bytes(sig.drawnPng)} style={{ height: 42, objectFit: "contain", objectPosition: "left" }} />
         ) : sig.typedSignature ? (
           <Text style={s.typed}>{sig.typedSignature}</Text>
         ) : (
@@ -132,7 +135,7 @@ function Photo({ photo, width, height }: { photo: TReportPhoto; width: number; h
   return (
     <View style={[s.photoCell, { width }]} wrap={false}>
       <View style={[s.photoFrame, { width, height }]}>
-        {photo.jpeg ? <Image src={{ data: Buffer.from(photo.jpeg), format: "jpg" }} style={{ width, height, objectFit: "contain" }} /> : <Text style={s.note}>Image not available</Text>}
+        {photo.jpeg ? <Image src={bytes(photo.jpeg)} style={{ width, height, objectFit: "contain" }} /> : <Text style={s.note}>Image not available</Text>}
       </View>
       <Text style={s.photoHeading}>{photo.heading}</Text>
       {photo.caption ? <Text style={s.photoCaption}>{photo.caption}</Text> : null}
@@ -188,6 +191,10 @@ export function ReportDocument({ data }: { data: TReportData }) {
           </View>
         </Section>
 
+      </Page>
+      {/* Long documents lay out faster as several page runs: each page break re-lays out only its own run. */}
+      <Page size="A4" style={s.page} wrap>
+        <PageFrame data={data} />
         <Section title="Entry record">
           {data.entry ? (
             <>
@@ -236,6 +243,9 @@ export function ReportDocument({ data }: { data: TReportData }) {
           )}
         </Section>
 
+      </Page>
+      <Page size="A4" style={s.page} wrap>
+        <PageFrame data={data} />
         <Section title="Coating">
           {data.coating.length ? (
             <Table
