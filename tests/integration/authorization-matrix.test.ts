@@ -196,6 +196,14 @@ const CASES: TCase[] = [
     scopes: ["own"], expect: (w) => (w === "anonymous" ? 401 : 404),
   },
   {
+    name: "POST /api/v1/password-reset (open to anyone, same answer)", method: "POST", path: () => "/api/v1/password-reset",
+    body: () => ({ email: "nobody-matrix@tests.tankwright.test" }), scopes: ["own"], expect: () => 200,
+  },
+  {
+    name: "POST /api/v1/password-reset/confirm (forged token)", method: "POST", path: () => "/api/v1/password-reset/confirm",
+    body: () => ({ token: "x".repeat(43), password: "a-long-enough-new-password", passwordAgain: "a-long-enough-new-password" }), scopes: ["own"], expect: () => 400,
+  },
+  {
     name: "POST /api/v1/verify (open to anyone)", method: "POST", path: () => "/api/v1/verify",
     body: () => ({ fingerprint: "0".repeat(64) }), scopes: ["own"], expect: () => 200,
   },
