@@ -6,7 +6,7 @@
 // (playwright-core) printing the HTML preview of the same report to PDF.
 // Asserts nothing; prints the budgets and whether each is met.
 //
-//   npm run bench:pdf
+//   npm run bench:pdf        (NODE_ENV=production, as the app runs)
 //
 // The photos are made and downscaled in a child process (files under
 // os.tmpdir(), removed at the end), so their memory does not count here.

@@ -58,16 +58,17 @@ const bytes = (b: Uint8Array) => (Buffer.isBuffer(b) ? b : Buffer.from(b.buffer,
 
 type TColumn<T> = { title: string; width: number | "flex"; cell: (row: T) => ReactNode };
 
+// One Text per cell, styles made once per column: long tables are most of the layout work.
 function Table<T>({ columns, rows, rowKey }: { columns: TColumn<T>[]; rows: T[]; rowKey: (row: T, i: number) => string }) {
-  const w = (c: TColumn<T>) => (c.width === "flex" ? { flex: 1 } : { width: c.width });
+  const styles = columns.map((c) => ({ ...s.td, ...(c.width === "flex" ? { flex: 1 } : { width: c.width }) }));
   return (
     <View style={s.table}>
-      <View style={s.th} fixed={false}>
-        {columns.map((c) => <Text key={c.title} style={[s.td, w(c)]}>{c.title}</Text>)}
+      <View style={s.th}>
+        {columns.map((c, j) => <Text key={c.title} style={styles[j]}>{c.title}</Text>)}
       </View>
       {rows.map((r, i) => (
         <View key={rowKey(r, i)} style={s.tr} wrap={false}>
-          {columns.map((c) => <View key={c.title} style={[s.td, w(c)]}><Text>{c.cell(r)}</Text></View>)}
+          {columns.map((c, j) => <Text key={c.title} style={styles[j]}>{c.cell(r)}</Text>)}
         </View>
       ))}
     </View>
