@@ -1,0 +1,207 @@
+// The docking work list: what each tank's latest countersigned inspection asks
+// the yard to do (steel renewal, coating repair, anodes, sediment removal), and
+// what it costs at the docking's unit rates.
+//
+// Rounding: every quantity and cost is carried unrounded; each cost shown (per
+// item, per kind, grand total) is rounded on its own, once, at the end, to the
+// currency's minor unit (cents for USD or EUR, whole yen for JPY), half away
+// from zero. The grand total is therefore the rounded sum of the exact costs,
+// and may differ by a cent from the sum of the rounded item costs.
+import { AppError } from "@/lib/errors";
+import { totalVolumeM3 } from "@/lib/calc/sediment";
+import { FINDING_TYPE_LABELS, MEMBER_KIND_LABELS, PLATING_REGION_LABELS, REPAIR_KIND_LABELS, type FINDING_STATUSES, type TFindingType, type TMemberKind, type TPlatingRegion, type TRepairKind } from "@/lib/vocabulary";
+
+export const WORK_KINDS = ["steel", "coating", "anodes", "sediment"] as const;
+export type TWorkKind = (typeof WORK_KINDS)[number];
+export const WORK_UNITS: Record<TWorkKind, string> = { steel: "kg", coating: "m²", anodes: "pcs", sediment: "m³" };
+export const WORK_KIND_LABELS: Record<TWorkKind, string> = { steel: "Steel renewal", coating: "Coating repair", anodes: "Anode renewal", sediment: "Sediment removal" };
+
+// ---------------------------------------------------------------- gathering
+
+export type TWorkSourceFinding = {
+  id: string;
+  number: number;
+  status: (typeof FINDING_STATUSES)[number];
+  type: TFindingType;
+  frameFrom: number;
+  frameTo: number;
+  memberKind: TMemberKind;
+  memberNumber?: number | null;
+  platingRegion?: TPlatingRegion | null;
+  repairKind?: TRepairKind | null;
+  /** Stored with the finding, computed by lib/inspection/quantities.ts. */
+  steelWeightKg: number | null;
+  coatingRepairM2: number | null;
+};
+
+/** One tank's latest countersigned inspection, as far as the work list needs it. */
+export type TWorkSource = {
+  tankId: string;
+  tankCode: string;
+  inspectionId: string;
+  inspectedOn: string;
+  findings: readonly TWorkSourceFinding[];
+  anodes: { toRenewCount: number } | null;
+  sedimentZones: readonly { depthMm: number; areaM2: number }[];
+};
+
+export type TWorkItem = {
+  /** Stable across rebuilds of the list: finding id and kind, or tank id and kind. */
+  key: string;
+  kind: TWorkKind;
+  tankId: string;
+  tankCode: string;
+  inspectionId: string;
+  findingId: string | null;
+  description: string;
+  unit: string;
+  quantity: number;
+};
+
+/** An open finding with neither steel nor coating quantity: the yard cannot price it (monitor only, or not measured). */
+export type TUnpricedFinding = { tankId: string; tankCode: string; findingId: string; description: string };
+
+function describeFinding(f: TWorkSourceFinding): string {
+  const member = f.memberKind === "plating" && f.platingRegion ? `${PLATING_REGION_LABELS[f.platingRegion]} plating` : MEMBER_KIND_LABELS[f.memberKind];
+  const number = f.memberNumber === null || f.memberNumber === undefined ? "" : ` ${f.memberNumber}`;
+  const frames = f.frameFrom === f.frameTo ? `Fr. ${f.frameFrom}` : `Fr. ${f.frameFrom}–${f.frameTo}`;
+  return `Finding ${f.number}: ${FINDING_TYPE_LABELS[f.type]}, ${frames}, ${member}${number}`;
+}
+
+/**
+ * The work items of the given inspections, one per tank (its latest
+ * countersigned inspection): per open finding a steel item (kg) and a coating
+ * item (m²) where it has them, per tank an anode item (pieces to renew) and a
+ * sediment item (m³, all zones). Findings under monitoring or closed are left
+ * out; open findings without quantities come back as `unpriced`.
+ */
+export function gatherWorkItems(sources: readonly TWorkSource[]): { items: TWorkItem[]; unpriced: TUnpricedFinding[] } {
+  const items: TWorkItem[] = [];
+  const unpriced: TUnpricedFinding[] = [];
+  const seen = new Set<string>();
+  for (const s of sources) {
+    if (seen.has(s.tankId)) throw new Error(`tank ${s.tankCode} is given twice: pass only its latest countersigned inspection`);
+    seen.add(s.tankId);
+    const base = { tankId: s.tankId, tankCode: s.tankCode, inspectionId: s.inspectionId };
+    const findings = s.findings.filter((f) => f.status === "open").sort((a, b) => a.number - b.number);
+    for (const f of findings) {
+      const where = describeFinding(f);
+      const repair = f.repairKind ? ` (${REPAIR_KIND_LABELS[f.repairKind].toLowerCase()})` : "";
+      const steel = f.steelWeightKg ?? 0;
+      const coating = f.coatingRepairM2 ?? 0;
+      if (steel > 0) items.push({ ...base, key: `${f.id}:steel`, kind: "steel", findingId: f.id, description: `${where}: steel renewal${repair}`, unit: WORK_UNITS.steel, quantity: steel });
+      if (coating > 0) items.push({ ...base, key: `${f.id}:coating`, kind: "coating", findingId: f.id, description: `${where}: coating repair${repair}`, unit: WORK_UNITS.coating, quantity: coating });
+      if (steel <= 0 && coating <= 0) unpriced.push({ tankId: s.tankId, tankCode: s.tankCode, findingId: f.id, description: where });
+    }
+    if (s.anodes && s.anodes.toRenewCount > 0) {
+      items.push({ ...base, key: `${s.tankId}:anodes`, kind: "anodes", findingId: null, description: "Anodes to renew", unit: WORK_UNITS.anodes, quantity: s.anodes.toRenewCount });
+    }
+    const volume = totalVolumeM3(s.sedimentZones);
+    if (volume > 0) {
+      const zones = s.sedimentZones.length;
+      items.push({ ...base, key: `${s.tankId}:sediment`, kind: "sediment", findingId: null, description: `Sediment removal, ${zones} zone${zones === 1 ? "" : "s"}`, unit: WORK_UNITS.sediment, quantity: volume });
+    }
+  }
+  return { items, unpriced };
+}
+
+// ---------------------------------------------------------------- pricing
+
+/** The docking's unit rates, in one currency (the names of the dockings table). */
+export type TDockingRates = { currency: string; steelRatePerKg: number; coatingRatePerM2: number; anodeRatePerPiece: number; sedimentRatePerM3: number };
+
+/** The superintendent's decision on an item: excluded, or its quantity replaced (with a reason). Defaults: included, not adjusted. */
+export type TWorkItemDecision = { included?: boolean; adjustedQuantity?: number | null; adjustmentReason?: string | null };
+
+export type TPricedWorkItem<T> = T & {
+  included: boolean;
+  adjusted: boolean;
+  adjustedQuantity: number | null;
+  adjustmentReason: string | null;
+  /** The quantity priced: the adjusted one where there is one. */
+  quantityPriced: number;
+  unitRate: number;
+  /** quantityPriced × unitRate, rounded to the minor unit; shown for excluded items too, never added to the totals. */
+  cost: number;
+};
+
+export type TKindTotal = { quantity: number; cost: number; included: number; excluded: number };
+export type TPricedWorkList<T> = {
+  currency: string;
+  minorUnits: number;
+  items: TPricedWorkItem<T>[];
+  /** Per kind, over included items: quantity priced (unrounded), cost (rounded), item counts. */
+  totals: Record<TWorkKind, TKindTotal>;
+  grandTotal: number;
+  counts: { included: number; excluded: number; adjusted: number };
+};
+
+const RATE_OF: Record<TWorkKind, keyof Omit<TDockingRates, "currency">> = {
+  steel: "steelRatePerKg",
+  coating: "coatingRatePerM2",
+  anodes: "anodeRatePerPiece",
+  sediment: "sedimentRatePerM3",
+};
+
+/** Digits after the decimal point of a currency (2 for USD, 0 for JPY, 3 for KWD). */
+export function currencyMinorUnits(currency: string): number {
+  return new Intl.NumberFormat("en", { style: "currency", currency }).resolvedOptions().maximumFractionDigits ?? 2;
+}
+
+/**
+ * Rounds a money amount to `digits` decimals, half away from zero. The scaled
+ * value is first read to 12 significant digits so that binary noise does not
+ * decide the half (1.005 × 100 is 100.49999999999999 in floating point).
+ */
+export function roundMoney(amount: number, digits: number): number {
+  const scaled = Number((Math.abs(amount) * 10 ** digits).toPrecision(12));
+  const rounded = (Math.sign(amount) * Math.round(scaled)) / 10 ** digits;
+  return rounded === 0 ? 0 : rounded;
+}
+
+/**
+ * Prices work items at the docking's rates. Each item may carry the
+ * superintendent's decision; an adjusted quantity replaces the gathered one and
+ * needs a reason. Refuses (422) a negative or non-numeric rate or quantity, or
+ * an adjustment without a reason; the docking schema refuses them first.
+ */
+export function priceWorkList<T extends { key: string; kind: TWorkKind; quantity: number } & TWorkItemDecision>(items: readonly T[], rates: TDockingRates): TPricedWorkList<T> {
+  const issues: { path: string; message: string }[] = [];
+  for (const kind of WORK_KINDS) {
+    const rate = rates[RATE_OF[kind]];
+    if (!Number.isFinite(rate) || rate < 0) issues.push({ path: RATE_OF[kind], message: "must be a number, 0 or more" });
+  }
+  const minorUnits = currencyMinorUnits(rates.currency);
+  const exact = { steel: 0, coating: 0, anodes: 0, sediment: 0 } satisfies Record<TWorkKind, number>;
+  const totals = Object.fromEntries(WORK_KINDS.map((k) => [k, { quantity: 0, cost: 0, included: 0, excluded: 0 }])) as Record<TWorkKind, TKindTotal>;
+  const counts = { included: 0, excluded: 0, adjusted: 0 };
+  const priced = items.map((item) => {
+    const included = item.included ?? true;
+    const adjustedQuantity = item.adjustedQuantity ?? null;
+    const adjustmentReason = item.adjustmentReason?.trim() || null;
+    if (!Number.isFinite(item.quantity) || item.quantity < 0) issues.push({ path: `${item.key}.quantity`, message: "must be a number, 0 or more" });
+    if (adjustedQuantity !== null) {
+      if (!Number.isFinite(adjustedQuantity) || adjustedQuantity < 0) issues.push({ path: `${item.key}.adjustedQuantity`, message: "must be a number, 0 or more" });
+      if (!adjustmentReason) issues.push({ path: `${item.key}.adjustmentReason`, message: "is required: say why the quantity was changed" });
+    }
+    const quantityPriced = adjustedQuantity ?? item.quantity;
+    const unitRate = rates[RATE_OF[item.kind]];
+    const cost = quantityPriced * unitRate;
+    const total = totals[item.kind];
+    if (included) {
+      exact[item.kind] += cost;
+      total.quantity += quantityPriced;
+      total.included += 1;
+      counts.included += 1;
+    } else {
+      total.excluded += 1;
+      counts.excluded += 1;
+    }
+    if (adjustedQuantity !== null) counts.adjusted += 1;
+    return { ...item, included, adjusted: adjustedQuantity !== null, adjustedQuantity, adjustmentReason, quantityPriced, unitRate, cost: roundMoney(cost, minorUnits) };
+  });
+  if (issues.length) throw new AppError("unprocessable", "The work list cannot be priced as it is.", issues);
+  for (const k of WORK_KINDS) totals[k].cost = roundMoney(exact[k], minorUnits);
+  const grandTotal = roundMoney(WORK_KINDS.reduce((sum, k) => sum + exact[k], 0), minorUnits);
+  return { currency: rates.currency, minorUnits, items: priced, totals, grandTotal, counts };
+}

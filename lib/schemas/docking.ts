@@ -1,0 +1,63 @@
+import { z } from "zod";
+import { numberFromForm, optionalText } from "./common";
+
+// A docking (yard, place, planned date, currency, unit rates) and the
+// superintendent's decision on one work-list item.
+
+const CURRENCIES = new Set(Intl.supportedValuesOf("currency"));
+const MAX_RATE = 1_000_000_000;
+
+const isCalendarDate = (iso: string) => {
+  const [y, m, d] = iso.split("-").map(Number) as [number, number, number];
+  const at = new Date(Date.UTC(y, m - 1, d));
+  return at.getUTCFullYear() === y && at.getUTCMonth() === m - 1 && at.getUTCDate() === d;
+};
+const isoDate = z
+  .string({ error: "is required" })
+  .regex(/^\d{4}-\d{2}-\d{2}$/, { error: "must be a date like 2026-03-14", abort: true })
+  .refine(isCalendarDate, "is not a calendar date");
+
+const rate = (per: string) =>
+  z.preprocess(
+    numberFromForm,
+    z
+      .number({ error: (i) => (i.input === undefined ? `is required: the price ${per}` : `must be a number: the price ${per}`) })
+      .min(0, "cannot be negative")
+      .max(MAX_RATE, `must be at most ${MAX_RATE.toLocaleString("en")}`),
+  );
+
+/** An ISO 4217 code the runtime knows as a currency (USD, EUR, JPY …); lower case is accepted and upper-cased. */
+export const ZCurrencyCode = z
+  .string({ error: "is required: a currency code such as USD or EUR" })
+  .trim()
+  .toUpperCase()
+  .refine((c) => /^[A-Z]{3}$/.test(c) && CURRENCIES.has(c), "must be an ISO 4217 currency code such as USD or EUR");
+
+export const ZDockingInput = z.object({
+  yard: z.string({ error: "is required" }).trim().min(2, "name the yard").max(120, "must be at most 120 characters"),
+  place: z.string({ error: "is required" }).trim().min(2, "name the place or port").max(120, "must be at most 120 characters"),
+  plannedOn: isoDate,
+  currency: ZCurrencyCode,
+  steelRatePerKg: rate("per kg of steel"),
+  coatingRatePerM2: rate("per m² of coating repair"),
+  anodeRatePerPiece: rate("per anode"),
+  sedimentRatePerM3: rate("per m³ of sediment"),
+});
+export type TDockingInput = z.infer<typeof ZDockingInput>;
+
+/** Include or exclude an item, or replace its quantity: an adjustment needs a reason (kept in the audit log). */
+export const ZDockingItemDecisionInput = z
+  .object({
+    included: z.boolean({ error: "say whether the item is included" }),
+    adjustedQuantity: z.preprocess(
+      numberFromForm,
+      z.number({ error: "must be a number" }).min(0, "cannot be negative").max(MAX_RATE, `must be at most ${MAX_RATE.toLocaleString("en")}`).nullable().optional(),
+    ),
+    adjustmentReason: optionalText(500),
+  })
+  .superRefine((d, ctx) => {
+    const adjusted = d.adjustedQuantity !== undefined && d.adjustedQuantity !== null;
+    if (adjusted && !d.adjustmentReason) ctx.addIssue({ code: "custom", path: ["adjustmentReason"], message: "is required: say why the quantity was changed" });
+    if (adjusted && d.adjustmentReason && d.adjustmentReason.length < 3) ctx.addIssue({ code: "custom", path: ["adjustmentReason"], message: "say why the quantity was changed, in a few words" });
+  });
+export type TDockingItemDecisionInput = z.infer<typeof ZDockingItemDecisionInput>;
