@@ -27,7 +27,7 @@ export function reportCss({ running, footer }: { running: string; footer: string
 .tw-report .rating-GOOD { color: #166534; font-weight: 700; }
 .tw-report .rating-FAIR { color: #a16207; font-weight: 700; }
 .tw-report .rating-POOR { color: #b91c1c; font-weight: 700; }
-.tw-report .diagrams { display: grid; grid-template-columns: 2fr 1fr; gap: 12px; align-items: start; }
+.tw-report .diagrams { display: grid; grid-template-columns: minmax(0, 300px) 1fr; gap: 12px; align-items: start; }
 .tw-report .diagrams .profile { grid-column: 1 / -1; }
 .tw-report .remarks p { margin: 0 0 6px; }
 .tw-report .remarks ul, .tw-report .remarks ol { margin: 0 0 6px; padding-left: 24px; }

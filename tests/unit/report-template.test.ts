@@ -2,7 +2,10 @@
 // read back as text; and the summary counts against totals worked by hand.
 import { mkdir, writeFile } from "node:fs/promises";
 import path from "node:path";
+import { createElement } from "react";
+import { renderToStaticMarkup } from "react-dom/server";
 import sharp from "sharp";
+import { ReportView } from "@/components/report/report-view";
 import { beforeAll, describe, expect, it } from "vitest";
 import { rateCoatingArea, rateTank } from "@/lib/calc/coating";
 import { astmD610Grade } from "@/lib/calc/rust-grade";
@@ -159,6 +162,21 @@ describe("report template", () => {
     expect(draft).toContain(DRAFT_MARK);
     expect(signed).not.toContain("DRAFT");
     expect(signed).toContain("Countersigned");
+  });
+});
+
+describe("HTML preview", () => {
+  it("shows the same content as the PDF, with the draft mark and print rules", async () => {
+    const data = assembleReport(await demoSource("submitted"));
+    const html = renderToStaticMarkup(createElement(ReportView, { data }));
+    await mkdir(ARTIFACTS, { recursive: true });
+    await writeFile(path.join(ARTIFACTS, "report-preview.html"), `<!doctype html><meta charset="utf-8">${html}`);
+    for (const text of ["Corran Tide", "3P — No. 3 WBT Port", "Fr. 118–121", "106 kg", "55 %", "Photo 2 · Close-up · Fr. 112–113 · Bracket, inner bottom · Finding 1", DRAFT_MARK, "size: A4", "break-before: page"]) {
+      expect(html).toContain(text);
+    }
+    expect(html).toContain('src="/photos/p2.jpg"');
+    const signed = renderToStaticMarkup(createElement(ReportView, { data: assembleReport(await demoSource("countersigned")) }));
+    expect(signed).not.toContain("DRAFT");
   });
 });
 
