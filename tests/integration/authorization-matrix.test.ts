@@ -191,7 +191,6 @@ const CASES: TCase[] = [
   },
   { name: "GET /api/v1/inspections/:id/deliveries", path: (s, sc) => `${inspectionPath(s, sc)}/deliveries`, scopes: ["own", "sibling", "other"], expect: vesselReader },
   { name: "GET /api/v1/inspections/:id/report (draft PDF)", path: (s, sc) => `${inspectionPath(s, sc)}/report`, scopes: ["own", "sibling", "other"], expect: vesselReader },
-  { name: "GET /api/v1/inspections/:id/report (draft PDF)", path: (s, sc) => `${inspectionPath(s, sc)}/report`, scopes: ["own", "sibling", "other"], expect: vesselReader },
   {
     name: "POST /api/v1/deliveries/:id/resend (unknown delivery)", method: "POST", path: () => `/api/v1/deliveries/${crypto.randomUUID()}/resend`,
     scopes: ["own"], expect: (w) => (w === "anonymous" ? 401 : 404),
@@ -241,7 +240,6 @@ const CASES: TCase[] = [
     scopes: ["own", "sibling", "other"], expect: recipientEditor(404),
   },
   { name: "page /inspections/:id", path: (s, sc) => `/inspections/${s.inspectionOf(vesselOf(s, sc).id)}`, scopes: ["own", "sibling", "other"], expect: (w, sc) => (w === "anonymous" ? 307 : vesselReader(w, sc)) },
-  { name: "page /inspections/:id/report", path: (s, sc) => `/inspections/${s.inspectionOf(vesselOf(s, sc).id)}/report`, scopes: ["own", "sibling", "other"], expect: (w, sc) => (w === "anonymous" ? 307 : vesselReader(w, sc)) },
   { name: "page /inspections/:id/report", path: (s, sc) => `/inspections/${s.inspectionOf(vesselOf(s, sc).id)}/report`, scopes: ["own", "sibling", "other"], expect: (w, sc) => (w === "anonymous" ? 307 : vesselReader(w, sc)) },
   {
     name: "page /vessels/:id/inspections/new", path: (s, sc) => `/vessels/${vesselOf(s, sc).id}/inspections/new`, scopes: ["own", "sibling", "other"],
