@@ -11,7 +11,7 @@
 // The photos are made and downscaled in a child process (files under
 // os.tmpdir(), removed at the end), so their memory does not count here.
 import { fork } from "node:child_process";
-import { mkdtemp, readFile, readdir, rm, writeFile } from "node:fs/promises";
+import { mkdir, mkdtemp, readFile, readdir, rm, writeFile } from "node:fs/promises";
 import os from "node:os";
 import path from "node:path";
 import { performance } from "node:perf_hooks";
@@ -103,6 +103,10 @@ async function makePhotos(dir: string): Promise<{ file: string; jpeg: Buffer; wi
     child.once("exit", resolve);
   });
   if (code !== 0) throw new Error(`making the photos failed (child exit code ${code})`);
+  return readPhotos(dir);
+}
+
+async function readPhotos(dir: string): Promise<{ file: string; jpeg: Buffer; width: number; height: number }[]> {
   const files = (await readdir(dir)).filter((f) => f.endsWith(".jpg")).sort();
   return Promise.all(files.map(async (f) => {
     const jpeg = await readFile(path.join(dir, f));
@@ -287,10 +291,14 @@ async function chromiumRuns(html: string, dir: string) {
 async function main() {
   // Other work on the machine slows every figure: the load average is printed with them.
   const loadStart = os.loadavg().map((l) => l.toFixed(1)).join(" ");
-  const dir = await mkdtemp(path.join(os.tmpdir(), "tankwright-bench-pdf-"));
+  // BENCH_PDF_PHOTO_DIR keeps the photos between runs (made once, reused while it holds them all).
+  const kept = process.env.BENCH_PDF_PHOTO_DIR;
+  if (kept) await mkdir(kept, { recursive: true });
+  const reuse = kept ? (await readdir(kept)).filter((f) => f.endsWith(".jpg")).length === PHOTOS : false;
+  const dir = kept ?? (await mkdtemp(path.join(os.tmpdir(), "tankwright-bench-pdf-")));
   try {
-    console.log(`Making ${PHOTOS} photos of ${WIDTH} × ${HEIGHT} px and their report variants (makeVariants) in a child process…`);
-    const made = await timed(() => makePhotos(dir));
+    console.log(reuse ? `Reusing the ${PHOTOS} report variants in ${dir}` : `Making ${PHOTOS} photos of ${WIDTH} × ${HEIGHT} px and their report variants (makeVariants) in a child process…`);
+    const made = await timed(() => (reuse ? readPhotos(dir) : makePhotos(dir)));
     const photos = made.value;
     const jpegBytes = photos.reduce((s, p) => s + p.jpeg.length, 0);
     console.log(`  ${photos.length} report variants, ${mib(jpegBytes)} in all (${Math.round(jpegBytes / photos.length / 1000)} kB each on average), made in ${secs(made.ms)}`);
@@ -307,6 +315,7 @@ async function main() {
     console.log(`  peak RSS     ${mib(product.peakRss)} (RSS before the renders ${mib(product.rssStart)})`);
     console.log(`  PDF          ${mib(product.pdf.length)}, ${pages} pages`);
 
+    if (process.env.BENCH_PDF_ONLY === "product") return;
     const lower: number[] = [];
     let lowerPdf = Buffer.alloc(0);
     for (let i = 0; i < OTHER_RUNS; i++) {
@@ -337,7 +346,7 @@ async function main() {
     console.log(`  render median ≤ 5 s                 ${secs(productMedian)}: ${verdict(productMedian <= BUDGET_MEDIAN_MS)}`);
     console.log(`\nMachine: ${os.cpus()[0]?.model ?? "unknown CPU"}, ${os.availableParallelism()} cores, Node.js ${process.version}; load average at the start ${loadStart}, at the end ${os.loadavg().map((l) => l.toFixed(1)).join(" ")}`);
   } finally {
-    await rm(dir, { recursive: true, force: true });
+    if (!kept) await rm(dir, { recursive: true, force: true });
   }
 }
 

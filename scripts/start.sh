@@ -51,7 +51,7 @@ if [ "$MODE" = dev ]; then
 else
   log "building the app"
   "$NEXT" build >"$ROOT/.data/build.log" 2>&1 || { tail -40 "$ROOT/.data/build.log" >&2; die "next build failed (log: .data/build.log)"; }
-  start_bg "$NEXT" start -H 127.0.0.1 -p "$APP_PORT"; PIDS+=("$BG_PID")
+  NODE_OPTIONS="${NODE_OPTIONS:-$APP_NODE_OPTIONS}" start_bg "$NEXT" start -H 127.0.0.1 -p "$APP_PORT"; PIDS+=("$BG_PID")
 fi
 wait_for_http "http://127.0.0.1:$APP_PORT/sign-in" 120 || die "the app did not answer on port $APP_PORT"
 

@@ -71,7 +71,7 @@ log "building the app for the integration and browser tests"
 require_free_port "$APP_PORT"
 # TANKWRIGHT_TEST_REUSE_BUILD=1 keeps an existing .next (a developer's shortcut; CI always builds).
 if { [ "${TANKWRIGHT_TEST_REUSE_BUILD:-}" = 1 ] && [ -f "$DIST_DIR/BUILD_ID" ]; } || node_modules/.bin/next build >"$RESULTS/build.log" 2>&1; then
-  start_bg node_modules/.bin/next start -H 127.0.0.1 -p "$APP_PORT" >"$RESULTS/app.log" 2>&1; APP_PID=$BG_PID
+  NODE_OPTIONS="${NODE_OPTIONS:-$APP_NODE_OPTIONS}" start_bg node_modules/.bin/next start -H 127.0.0.1 -p "$APP_PORT" >"$RESULTS/app.log" 2>&1; APP_PID=$BG_PID
   if wait_for_http "$APP_URL/sign-in" 90; then
     run_project integration
     run_project e2e

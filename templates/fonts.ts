@@ -21,9 +21,9 @@ export function registerPdfFonts() {
     Font.register({
       family,
       fonts: [
-        { src: path.join(FONT_DIR, `noto-sans-${subset}-400-normal.woff`), fontWeight: 400 },
-        { src: path.join(FONT_DIR, `noto-sans-${subset}-700-normal.woff`), fontWeight: 700 },
-        ...(subset === "latin" ? [{ src: path.join(FONT_DIR, "noto-sans-latin-400-italic.woff"), fontWeight: 400, fontStyle: "italic" as const }] : []),
+        { src: path.join(FONT_DIR, `noto-sans-${subset}-400-normal.ttf`), fontWeight: 400 },
+        { src: path.join(FONT_DIR, `noto-sans-${subset}-700-normal.ttf`), fontWeight: 700 },
+        ...(subset === "latin" ? [{ src: path.join(FONT_DIR, "noto-sans-latin-400-italic.ttf"), fontWeight: 400, fontStyle: "italic" as const }] : []),
       ],
     });
   }
