@@ -68,7 +68,7 @@ cat <<MSG
 
   Photos, drawings and PDFs: ${S3_ENDPOINT:-AWS S3}, bucket $S3_BUCKET
   $MAIL_LINE
-  Background jobs (photo variants, clean-up) run inside the app (JOBS_WORKER).
+  Background jobs (photo variants, report PDFs, e-mail, clean-up) run inside the app (JOBS_WORKER).
 
   Ctrl-C stops the app${S3_PID:+, the local S3 store}${MAIL_PID:+, the mail catcher}${OWN_PG:+ and PostgreSQL}.
 
