@@ -194,6 +194,8 @@ export const RECIPIENT_KINDS = ["office", "class"] as const;
 export const DELIVERY_STATUSES = ["queued", "sent", "failed"] as const;
 export const COST_RATE_KINDS = ["steel_per_kg", "coating_per_m2", "anode_per_piece", "sediment_per_m3"] as const;
 export const DOCKING_STATUSES = ["planned", "in_progress", "completed", "cancelled"] as const;
+export type TDockingStatus = (typeof DOCKING_STATUSES)[number];
+export const DOCKING_STATUS_LABELS: Record<TDockingStatus, string> = { planned: "Planned", in_progress: "In progress", completed: "Completed", cancelled: "Cancelled" };
 export const DOCKING_ITEM_KINDS = ["steel", "coating", "anodes", "sediment", "other"] as const;
 /** How exactly 20 % breakdown is rated: FAIR by the table of definitions, POOR by the older wording. */
 export const TWENTY_PERCENT_RULES = ["table", "wording"] as const;

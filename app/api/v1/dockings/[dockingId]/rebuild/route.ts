@@ -1,0 +1,8 @@
+import { requireActor } from "@/lib/auth/actor";
+import { route } from "@/lib/http/route";
+import { rebuildDockingAs } from "@/lib/services/dockings";
+
+type P = { dockingId: string };
+
+/** Gathers the work list again from the latest countersigned reports; decisions stay with their items. */
+export const POST = route<P>(async (_req, { dockingId }) => rebuildDockingAs(await requireActor(), dockingId));

@@ -1,0 +1,204 @@
+import "server-only";
+import { and, asc, desc, eq, inArray } from "drizzle-orm";
+import { db } from "@/db";
+import { anodeRecords, dockingItems, dockings, findings, inspections, sedimentZones, tanks } from "@/db/schema";
+import type { TWriter } from "@/db/seed/builders";
+import type { TWorkItem, TWorkSource } from "@/lib/office/work-list";
+import type { TDockingInput } from "@/lib/schemas/docking";
+import { writeAudit } from "./audit";
+
+type TOrgScope = { orgId: string };
+type TVesselScope = TOrgScope & { vesselId: string };
+type TDockingScope = TOrgScope & { dockingId: string };
+
+const dockingColumns = {
+  id: dockings.id,
+  orgId: dockings.orgId,
+  vesselId: dockings.vesselId,
+  yard: dockings.yard,
+  place: dockings.place,
+  plannedOn: dockings.plannedOn,
+  currency: dockings.currency,
+  steelRatePerKg: dockings.steelRatePerKg,
+  coatingRatePerM2: dockings.coatingRatePerM2,
+  anodeRatePerPiece: dockings.anodeRatePerPiece,
+  sedimentRatePerM3: dockings.sedimentRatePerM3,
+  status: dockings.status,
+  createdAt: dockings.createdAt,
+  updatedAt: dockings.updatedAt,
+};
+
+const itemColumns = {
+  id: dockingItems.id,
+  tankId: dockingItems.tankId,
+  tankCode: tanks.code,
+  findingId: dockingItems.findingId,
+  kind: dockingItems.kind,
+  description: dockingItems.description,
+  quantity: dockingItems.quantity,
+  unit: dockingItems.unit,
+  adjustedQuantity: dockingItems.adjustedQuantity,
+  included: dockingItems.included,
+  adjustmentReason: dockingItems.adjustmentReason,
+  doneAt: dockingItems.doneAt,
+};
+export type TDockingItemRow = Awaited<ReturnType<typeof listDockingItems>>[number];
+
+/** The key that identifies an item across rebuilds: finding and kind, or tank and kind (the key of lib/office/work-list.ts). */
+export const itemKey = (i: { findingId: string | null; tankId: string | null; kind: string }) => `${i.findingId ?? i.tankId ?? "none"}:${i.kind}`;
+
+/** For the authorization module only: the company and vessel of a docking, unscoped. */
+export async function unsafeGetDockingScope({ dockingId }: { dockingId: string }) {
+  const [row] = await db().select({ orgId: dockings.orgId, vesselId: dockings.vesselId }).from(dockings).where(eq(dockings.id, dockingId));
+  return row ?? null;
+}
+
+export async function listDockings(scope: TVesselScope) {
+  return db()
+    .select(dockingColumns)
+    .from(dockings)
+    .where(and(eq(dockings.orgId, scope.orgId), eq(dockings.vesselId, scope.vesselId)))
+    .orderBy(desc(dockings.plannedOn), desc(dockings.createdAt));
+}
+
+export async function getDocking(scope: TDockingScope) {
+  const [row] = await db().select(dockingColumns).from(dockings).where(and(eq(dockings.orgId, scope.orgId), eq(dockings.id, scope.dockingId)));
+  return row ?? null;
+}
+
+export async function listDockingItems(scope: TDockingScope) {
+  return db()
+    .select(itemColumns)
+    .from(dockingItems)
+    .leftJoin(tanks, and(eq(tanks.orgId, dockingItems.orgId), eq(tanks.id, dockingItems.tankId)))
+    .where(and(eq(dockingItems.orgId, scope.orgId), eq(dockingItems.dockingId, scope.dockingId)))
+    .orderBy(asc(tanks.code), asc(dockingItems.kind), asc(dockingItems.description));
+}
+
+/** Each tank's latest countersigned inspection of the vessel, with what the work list needs of it. */
+export async function listWorkSources(scope: TVesselScope, w: TWriter = db()): Promise<TWorkSource[]> {
+  const latest = await w
+    .selectDistinctOn([inspections.tankId], { inspectionId: inspections.id, tankId: inspections.tankId, tankCode: tanks.code, inspectedOn: inspections.inspectedOn })
+    .from(inspections)
+    .innerJoin(tanks, and(eq(tanks.orgId, inspections.orgId), eq(tanks.id, inspections.tankId)))
+    .where(and(eq(inspections.orgId, scope.orgId), eq(inspections.vesselId, scope.vesselId), eq(inspections.status, "countersigned")))
+    .orderBy(inspections.tankId, desc(inspections.inspectedOn), desc(inspections.revision), desc(inspections.countersignedAt));
+  if (!latest.length) return [];
+  const ids = latest.map((l) => l.inspectionId);
+  const [fs, anodes, zones] = await Promise.all([
+    w.select().from(findings).where(and(eq(findings.orgId, scope.orgId), inArray(findings.inspectionId, ids))),
+    w.select().from(anodeRecords).where(and(eq(anodeRecords.orgId, scope.orgId), inArray(anodeRecords.inspectionId, ids))),
+    w.select().from(sedimentZones).where(and(eq(sedimentZones.orgId, scope.orgId), inArray(sedimentZones.inspectionId, ids))),
+  ]);
+  return latest
+    .sort((a, b) => a.tankCode.localeCompare(b.tankCode))
+    .map((l) => ({
+      tankId: l.tankId,
+      tankCode: l.tankCode,
+      inspectionId: l.inspectionId,
+      inspectedOn: l.inspectedOn,
+      findings: fs.filter((f) => f.inspectionId === l.inspectionId),
+      anodes: anodes.find((a) => a.inspectionId === l.inspectionId) ?? null,
+      sedimentZones: zones.filter((z) => z.inspectionId === l.inspectionId),
+    }));
+}
+
+/**
+ * Brings the docking's items in line with the gathered work: new items are
+ * added, gathered quantities and descriptions refreshed, items no longer asked
+ * for removed. Decisions (included, adjusted quantity, reason) stay with their
+ * item. Runs inside the caller's transaction; returns what changed.
+ */
+async function syncItems(w: TWriter, v: TDockingScope, work: readonly TWorkItem[]) {
+  const existing = await w.select().from(dockingItems).where(and(eq(dockingItems.orgId, v.orgId), eq(dockingItems.dockingId, v.dockingId)));
+  const byKey = new Map(existing.map((e) => [itemKey(e), e]));
+  const wanted = new Set(work.map((i) => `${i.findingId ?? i.tankId}:${i.kind}`));
+  let added = 0;
+  let updated = 0;
+  for (const item of work) {
+    const found = byKey.get(`${item.findingId ?? item.tankId}:${item.kind}`);
+    if (!found) {
+      await w.insert(dockingItems).values({ orgId: v.orgId, dockingId: v.dockingId, tankId: item.tankId, findingId: item.findingId, kind: item.kind, description: item.description, quantity: item.quantity, unit: item.unit });
+      added += 1;
+    } else if (found.quantity !== item.quantity || found.description !== item.description || found.unit !== item.unit) {
+      await w.update(dockingItems).set({ quantity: item.quantity, description: item.description, unit: item.unit }).where(and(eq(dockingItems.orgId, v.orgId), eq(dockingItems.id, found.id)));
+      updated += 1;
+    }
+  }
+  const gone = existing.filter((e) => !wanted.has(itemKey(e)));
+  if (gone.length) await w.delete(dockingItems).where(and(eq(dockingItems.orgId, v.orgId), inArray(dockingItems.id, gone.map((g) => g.id))));
+  return { added, updated, removed: gone.length };
+}
+
+/** Locks the docking row for a write and returns it (null: no such docking in this company). */
+async function lockDocking(w: TWriter, v: TDockingScope) {
+  const [row] = await w.select().from(dockings).where(and(eq(dockings.orgId, v.orgId), eq(dockings.id, v.dockingId))).for("update");
+  return row ?? null;
+}
+
+/** Creates the docking and its items from the vessel's countersigned reports, in one transaction. */
+export async function createDocking(v: TVesselScope & { actorUserId: string; input: TDockingInput; gather: (sources: TWorkSource[]) => TWorkItem[] }) {
+  return db().transaction(async (tx) => {
+    const [row] = await tx.insert(dockings).values({ orgId: v.orgId, vesselId: v.vesselId, createdBy: v.actorUserId, ...v.input }).returning({ id: dockings.id });
+    const work = v.gather(await listWorkSources(v, tx));
+    const changes = await syncItems(tx, { orgId: v.orgId, dockingId: row!.id }, work);
+    await writeAudit(tx, { orgId: v.orgId, actorUserId: v.actorUserId, action: "docking.create", entity: "docking", entityId: row!.id, detail: { vesselId: v.vesselId, ...v.input, items: changes.added } });
+    return row!;
+  });
+}
+
+/** Gathers again; refuses (returns "locked") a docking that is completed or cancelled. */
+export async function rebuildDocking(v: TDockingScope & { actorUserId: string; gather: (sources: TWorkSource[]) => TWorkItem[] }) {
+  return db().transaction(async (tx) => {
+    const docking = await lockDocking(tx, v);
+    if (!docking) return null;
+    if (docking.status === "completed" || docking.status === "cancelled") return { locked: docking.status } as const;
+    const changes = await syncItems(tx, v, v.gather(await listWorkSources({ orgId: v.orgId, vesselId: docking.vesselId }, tx)));
+    await tx.update(dockings).set({ updatedAt: new Date() }).where(and(eq(dockings.orgId, v.orgId), eq(dockings.id, v.dockingId)));
+    await writeAudit(tx, { orgId: v.orgId, actorUserId: v.actorUserId, action: "docking.rebuild", entity: "docking", entityId: v.dockingId, detail: changes });
+    return { changes } as const;
+  });
+}
+
+export type TItemDecision = { id: string; included: boolean; adjustedQuantity: number | null; adjustmentReason: string | null };
+
+/**
+ * Applies the superintendent's decisions to items of the docking, each with an
+ * audit row holding the before and after. Returns "locked" for a completed or
+ * cancelled docking, "unknown" with the ids that are not items of this docking
+ * (nothing is changed then), null for no such docking.
+ */
+export async function decideItems(v: TDockingScope & { actorUserId: string; decisions: readonly TItemDecision[] }) {
+  return db().transaction(async (tx) => {
+    const docking = await lockDocking(tx, v);
+    if (!docking) return null;
+    if (docking.status === "completed" || docking.status === "cancelled") return { locked: docking.status } as const;
+    const ids = v.decisions.map((d) => d.id);
+    const rows = await tx.select().from(dockingItems).where(and(eq(dockingItems.orgId, v.orgId), eq(dockingItems.dockingId, v.dockingId), inArray(dockingItems.id, ids)));
+    const byId = new Map(rows.map((r) => [r.id, r]));
+    const unknown = ids.filter((id) => !byId.has(id));
+    if (unknown.length) return { unknown } as const;
+    let changed = 0;
+    for (const d of v.decisions) {
+      const before = byId.get(d.id)!;
+      const same = before.included === d.included && before.adjustedQuantity === d.adjustedQuantity && (before.adjustmentReason ?? null) === d.adjustmentReason;
+      if (same) continue;
+      await tx.update(dockingItems).set({ included: d.included, adjustedQuantity: d.adjustedQuantity, adjustmentReason: d.adjustmentReason }).where(and(eq(dockingItems.orgId, v.orgId), eq(dockingItems.id, d.id)));
+      await writeAudit(tx, {
+        orgId: v.orgId,
+        actorUserId: v.actorUserId,
+        action: "docking_item.decide",
+        entity: "docking_item",
+        entityId: d.id,
+        detail: {
+          dockingId: v.dockingId,
+          before: { included: before.included, adjustedQuantity: before.adjustedQuantity, adjustmentReason: before.adjustmentReason },
+          after: { included: d.included, adjustedQuantity: d.adjustedQuantity, adjustmentReason: d.adjustmentReason },
+        },
+      });
+      changed += 1;
+    }
+    if (changed) await tx.update(dockings).set({ updatedAt: new Date() }).where(and(eq(dockings.orgId, v.orgId), eq(dockings.id, v.dockingId)));
+    return { changed } as const;
+  });
+}

@@ -1,0 +1,54 @@
+// The docking work list as CSV (RFC 4180: comma, CRLF, fields quoted when
+// they hold a comma, a quote or a line break, quotes doubled). A text cell that
+// a spreadsheet would run as a formula (=, +, -, @ first) gets a leading
+// apostrophe. Costs carry the currency's minor unit; quantities up to 3 decimals.
+import { WORK_KIND_LABELS, WORK_KINDS, WORK_UNITS, type TPricedWorkList, type TWorkKind } from "./work-list";
+
+export const WORK_LIST_CSV_HEADER = ["Tank", "Kind", "Description", "Included", "Quantity gathered", "Adjusted quantity", "Quantity priced", "Unit", "Unit rate", "Currency", "Cost", "Reason"] as const;
+
+export type TCsvItem = {
+  tankCode: string | null;
+  kind: TWorkKind;
+  description: string;
+  unit: string;
+  quantity: number;
+};
+
+export function csvField(value: string): string {
+  return /[",\r\n]/.test(value) ? `"${value.replaceAll('"', '""')}"` : value;
+}
+
+/** Text typed by a person: a leading apostrophe keeps a spreadsheet from running it as a formula. */
+export function defuseFormula(value: string): string {
+  return /^[=+\-@\t\r]/.test(value) ? `'${value}` : value;
+}
+
+export const csvQuantity = (q: number) => String(Number(q.toFixed(3)));
+export const csvMoney = (amount: number, minorUnits: number) => amount.toFixed(minorUnits);
+
+export function workListCsv<T extends TCsvItem>(list: TPricedWorkList<T>, head: { vesselName: string; yard: string; place: string; plannedOn: string }): string {
+  const money = (n: number) => csvMoney(n, list.minorUnits);
+  const rows: string[][] = [[...WORK_LIST_CSV_HEADER]];
+  for (const i of list.items) {
+    rows.push([
+      defuseFormula(i.tankCode ?? ""),
+      WORK_KIND_LABELS[i.kind],
+      defuseFormula(i.description),
+      i.included ? "yes" : "no",
+      csvQuantity(i.quantity),
+      i.adjustedQuantity === null ? "" : csvQuantity(i.adjustedQuantity),
+      csvQuantity(i.quantityPriced),
+      i.unit,
+      String(i.unitRate),
+      list.currency,
+      money(i.cost),
+      defuseFormula(i.adjustmentReason ?? ""),
+    ]);
+  }
+  for (const k of WORK_KINDS) {
+    const t = list.totals[k];
+    rows.push(["Total", WORK_KIND_LABELS[k], `${t.included} included, ${t.excluded} excluded`, "", "", "", csvQuantity(t.quantity), WORK_UNITS[k], "", list.currency, money(t.cost), ""]);
+  }
+  rows.push(["Grand total", "", defuseFormula(`${head.vesselName}, ${head.yard}, ${head.place}, planned ${head.plannedOn}`), "", "", "", "", "", "", list.currency, money(list.grandTotal), ""]);
+  return rows.map((r) => r.map(csvField).join(",")).join("\r\n") + "\r\n";
+}

@@ -1,0 +1,107 @@
+import "server-only";
+// Dockings and their work lists: the office plans a docking of a vessel, the
+// product gathers the work from each tank's latest countersigned report, the
+// superintendent includes, excludes or adjusts items (with a reason), and the
+// list is priced at the docking's rates (lib/office/work-list.ts).
+import { z } from "zod";
+import * as q from "@/db/queries/dockings";
+import type { TActor } from "@/lib/auth/actor";
+import { authorizeVessel } from "@/lib/auth/authorize";
+import { AppError } from "@/lib/errors";
+import { validateInput } from "@/lib/http/route";
+import { workListCsv } from "@/lib/office/work-list-csv";
+import { gatherWorkItems, priceWorkList, WORK_KINDS, type TWorkKind, type TWorkSource } from "@/lib/office/work-list";
+import { ZDockingInput, ZDockingItemDecisionInput } from "@/lib/schemas/docking";
+
+/** Who plans dockings and reads their work lists: the office. */
+export const DOCKING_PLANNERS = ["superintendent", "admin"] as const;
+
+const ZId = z.uuid();
+
+/** A docking through the vessel it belongs to: 404 for another company's or an unknown id, 403 for a role that may not plan. */
+async function authorizeDocking(actor: TActor, dockingId: string) {
+  if (!ZId.safeParse(dockingId).success) throw new AppError("not_found", "No such docking.");
+  const scope = await q.unsafeGetDockingScope({ dockingId });
+  if (!scope) throw new AppError("not_found", "No such docking.");
+  try {
+    const auth = await authorizeVessel({ actor, vesselId: scope.vesselId, allow: DOCKING_PLANNERS });
+    return { ...auth, dockingId };
+  } catch (error) {
+    if (error instanceof AppError && error.code === "not_found") throw new AppError("not_found", "No such docking.");
+    throw error;
+  }
+}
+
+const isWorkKind = (k: string): k is TWorkKind => (WORK_KINDS as readonly string[]).includes(k);
+const gather = (sources: TWorkSource[]) => gatherWorkItems(sources).items;
+
+const lockedError = (status: string) =>
+  new AppError("conflict", `This docking is ${status}: its work list can no longer be changed.`, [{ path: "status", message: `the docking is ${status}` }]);
+
+export async function listDockingsAs(actor: TActor, vesselId: string) {
+  const { orgId, vessel } = await authorizeVessel({ actor, vesselId, allow: DOCKING_PLANNERS });
+  return { vessel: { id: vessel.id, name: vessel.name }, dockings: await q.listDockings({ orgId, vesselId }) };
+}
+
+export async function createDockingAs(actor: TActor, vesselId: string, body: unknown) {
+  const { orgId } = await authorizeVessel({ actor, vesselId, allow: DOCKING_PLANNERS });
+  const input = validateInput(ZDockingInput, body);
+  return q.createDocking({ orgId, vesselId, actorUserId: actor.userId, input, gather });
+}
+
+/** The docking with its priced work list, and the open findings the yard cannot price (no quantities). */
+export async function getDockingAs(actor: TActor, dockingId: string) {
+  const { orgId, vessel } = await authorizeDocking(actor, dockingId);
+  const docking = await q.getDocking({ orgId, dockingId });
+  if (!docking) throw new AppError("not_found", "No such docking.");
+  const [rows, sources] = await Promise.all([q.listDockingItems({ orgId, dockingId }), q.listWorkSources({ orgId, vesselId: docking.vesselId })]);
+  // Items are gathered with the four work kinds only; "other" is kept in the enum for hand-added work.
+  const items = rows.flatMap((r) => (isWorkKind(r.kind) ? [{ ...r, key: r.id, kind: r.kind }] : []));
+  const workList = priceWorkList(items, docking);
+  return {
+    vessel: { id: vessel.id, name: vessel.name, imoNumber: vessel.imoNumber },
+    docking,
+    workList,
+    unpriced: gatherWorkItems(sources).unpriced,
+    sources: sources.map((s) => ({ tankId: s.tankId, tankCode: s.tankCode, inspectionId: s.inspectionId, inspectedOn: s.inspectedOn })),
+  };
+}
+
+const ZDecisions = z.object({
+  items: z
+    .array(z.object({ id: z.string({ error: "is required" }) }).and(ZDockingItemDecisionInput))
+    .min(1, "name at least one item")
+    .max(1000, "at most 1000 items at once"),
+});
+
+/** Include, exclude or adjust items; every exclusion and adjustment needs a reason, and each change is audit-logged. */
+export async function decideDockingItemsAs(actor: TActor, dockingId: string, body: unknown) {
+  const { orgId } = await authorizeDocking(actor, dockingId);
+  const input = validateInput(ZDecisions, body);
+  const issues = input.items.flatMap((d, n) =>
+    !d.included && !d.adjustmentReason ? [{ path: `items.${n}.adjustmentReason`, message: "is required: say why the item is excluded" }] : [],
+  );
+  if (issues.length) throw new AppError("bad_request", `Check ${issues.map((i) => i.path).join(", ")}: ${issues[0]!.message}`, issues);
+  const decisions = input.items.map((d) => ({ id: d.id, included: d.included, adjustedQuantity: d.adjustedQuantity ?? null, adjustmentReason: d.adjustmentReason ?? null }));
+  const result = await q.decideItems({ orgId, dockingId, actorUserId: actor.userId, decisions });
+  if (!result) throw new AppError("not_found", "No such docking.");
+  if (result.locked) throw lockedError(result.locked);
+  if (result.unknown) throw new AppError("not_found", "No such item in this docking; nothing was changed.", result.unknown.map((id) => ({ path: "items", message: `${id} is not an item of this docking` })));
+  return { changed: result.changed ?? 0, ...(await getDockingAs(actor, dockingId)) };
+}
+
+/** Gathers the work again from the latest countersigned reports, keeping each item's decision. */
+export async function rebuildDockingAs(actor: TActor, dockingId: string) {
+  const { orgId } = await authorizeDocking(actor, dockingId);
+  const result = await q.rebuildDocking({ orgId, dockingId, actorUserId: actor.userId, gather });
+  if (!result) throw new AppError("not_found", "No such docking.");
+  if (result.locked) throw lockedError(result.locked);
+  return { changes: result.changes!, ...(await getDockingAs(actor, dockingId)) };
+}
+
+export async function workListCsvAs(actor: TActor, dockingId: string) {
+  const { vessel, docking, workList } = await getDockingAs(actor, dockingId);
+  const csv = workListCsv(workList, { vesselName: vessel.name, yard: docking.yard, place: docking.place, plannedOn: docking.plannedOn });
+  const fileName = `work-list-${vessel.name}-${docking.plannedOn}.csv`.replace(/[^A-Za-z0-9._-]+/g, "-");
+  return { csv, fileName };
+}

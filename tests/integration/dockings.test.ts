@@ -1,0 +1,240 @@
+// Dockings and their work lists: created by the office, gathered from each
+// tank's latest countersigned report, priced at the docking's rates, adjusted
+// with reasons, exported as CSV. Expected totals are worked by hand below.
+import { randomUUID } from "node:crypto";
+import { and, eq } from "drizzle-orm";
+import { beforeAll, describe, expect, it } from "vitest";
+import { auditLog, dockingItems, dockings, findings, inspections } from "@/db/schema";
+import { fillInspection } from "@/db/seed/complete-inspection";
+import { repairQuantities } from "@/lib/inspection/quantities";
+import { signIn, type TClient } from "../fixtures/http";
+import { buildScenario, PASSWORD, testDb, type TScenario } from "../fixtures/scenario";
+
+let s: TScenario;
+let superintendent: TClient;
+let admin: TClient;
+let officer: TClient;
+let master: TClient;
+let otherAdmin: TClient;
+let dockingId = "";
+
+// Rates of the test docking (USD). Hand-worked work list of the own vessel's tank:
+//   steel    finding 3 insert 1000 × 1500 × 10 mm, 1 piece: 1.0 × 1.5 × 0.010 m³ × 7850 kg/m³ = 117.75 kg × 4.20 = 494.55
+//   coating  finding 1 2.5 m² × 35.50 = 88.75; finding 2 1.2 m² × 35.50 = 42.60; finding 3 1.5 m² × 35.50 = 53.25 → 5.2 m², 184.60
+//   anodes   1 piece to renew × 180.00 = 180.00
+//   sediment 50 mm × 20 m² = 1.0 m³ × 95.00 = 95.00
+//   grand total 494.55 + 184.60 + 180.00 + 95.00 = 954.15
+const RATES = { currency: "USD", steelRatePerKg: 4.2, coatingRatePerM2: 35.5, anodeRatePerPiece: 180, sedimentRatePerM3: 95 };
+const DOCKING = { yard: "Test Yard Shipbuilding", place: "Test Harbour, Berth 3", plannedOn: "2027-04-12", ...RATES };
+
+const insert = { kind: "insert_plate" as const, lengthMm: 1000, widthMm: 1500, thicknessMm: 10, pieces: 1 };
+const monitor = { kind: "monitor_only" as const };
+
+type TBody = {
+  docking: { id: string; status: string };
+  workList: {
+    currency: string;
+    items: { id: string; kind: string; description: string; quantity: number; quantityPriced: number; cost: number; included: boolean; adjustedQuantity: number | null; adjustmentReason: string | null }[];
+    totals: Record<string, { quantity: number; cost: number; included: number; excluded: number }>;
+    grandTotal: number;
+  };
+  unpriced: { description: string }[];
+};
+
+async function body(res: Response) {
+  expect(res.status, await res.clone().text()).toBe(200);
+  return (await res.json()) as TBody;
+}
+const dockingCount = async (vesselId: string) => testDb().$count(dockings, eq(dockings.vesselId, vesselId));
+
+beforeAll(async () => {
+  s = await buildScenario();
+  const db = testDb();
+  const tank = s.tankOf(s.ownVessel.id);
+  const inspectionId = s.inspectionOf(s.ownVessel.id);
+  // An older countersigned report of the same tank: its finding must not be gathered.
+  const [old] = await db.insert(inspections).values({ orgId: s.org.id, vesselId: s.ownVessel.id, tankId: tank.id, inspectedOn: "2025-05-02", placeKind: "port", place: "Old port", status: "countersigned", countersignedAt: new Date("2025-05-03T10:00:00Z") }).returning();
+  await db.insert(findings).values({
+    id: randomUUID(), orgId: s.org.id, inspectionId: old!.id, number: 1, type: "pitting", frameFrom: 84, frameTo: 85, memberKind: "plating", platingRegion: "inner_bottom", lengthMm: 800, widthMm: 800,
+    description: "Old pitting 800 × 800 mm, superseded by the later report", repairKind: "insert_plate", repair: { ...insert, pieces: 4 }, ...repairQuantities({ ...insert, pieces: 4 }),
+  });
+  await fillInspection(db, { orgId: s.org.id, inspectionId, frameFrom: tank.frameFrom, testedAt: new Date("2026-11-20T08:00:00Z"), measuredBy: "Test officer", standbyPerson: "Test bosun" });
+  await db.insert(findings).values([
+    {
+      id: randomUUID(), orgId: s.org.id, inspectionId, number: 3, type: "pitting", frameFrom: 90, frameTo: 91, memberKind: "plating", platingRegion: "bottom_shell", lengthMm: 1000, widthMm: 1500, pitDepthMm: 4,
+      description: "Pitting over 1.0 × 1.5 m of bottom shell plating, up to 4 mm deep", repairKind: "insert_plate", repair: insert, ...repairQuantities(insert),
+    },
+    {
+      id: randomUUID(), orgId: s.org.id, inspectionId, number: 4, type: "crack", frameFrom: 95, frameTo: 95, memberKind: "plating", platingRegion: "inner_bottom", lengthMm: 30,
+      description: "Hairline crack 30 mm at the toe of the manhole coaming, to be watched", repairKind: "monitor_only", repair: monitor, ...repairQuantities(monitor),
+    },
+  ]);
+  await db.update(inspections).set({ status: "countersigned", countersignedAt: new Date("2026-11-21T10:00:00Z"), lockedAt: new Date("2026-11-21T10:00:00Z") }).where(eq(inspections.id, inspectionId));
+  [superintendent, admin, officer, master, otherAdmin] = await Promise.all([
+    signIn(s.users.superintendent.email, PASSWORD),
+    signIn(s.users.admin.email, PASSWORD),
+    signIn(s.users.officer.email, PASSWORD),
+    signIn(s.users.master.email, PASSWORD),
+    signIn(s.otherAdmin.email, PASSWORD),
+  ]);
+});
+
+describe("planning a docking", () => {
+  it("creates the docking and gathers the work of the latest countersigned report", async () => {
+    const res = await superintendent.request(`/api/v1/vessels/${s.ownVessel.id}/dockings`, { method: "POST", json: DOCKING });
+    expect(res.status, await res.clone().text()).toBe(201);
+    dockingId = ((await res.json()) as { docking: { id: string } }).docking.id;
+    const rows = await testDb().select().from(dockingItems).where(eq(dockingItems.dockingId, dockingId));
+    expect(rows.map((r) => `${r.kind} ${r.quantity}`).sort()).toEqual(["anodes 1", "coating 1.2", "coating 1.5", "coating 2.5", "sediment 1", "steel 117.75"]);
+    expect(await testDb().$count(auditLog, and(eq(auditLog.entityId, dockingId), eq(auditLog.action, "docking.create")))).toBe(1);
+  });
+
+  it("lists it for the vessel", async () => {
+    const res = await admin.request(`/api/v1/vessels/${s.ownVessel.id}/dockings`);
+    expect(res.status).toBe(200);
+    const list = (await res.json()) as { dockings: { id: string; yard: string; currency: string }[] };
+    expect(list.dockings).toEqual([expect.objectContaining({ id: dockingId, yard: DOCKING.yard, currency: "USD" })]);
+  });
+
+  it("prices the work list: per item, per kind and in total (worked by hand above)", async () => {
+    const b = await body(await superintendent.request(`/api/v1/dockings/${dockingId}`));
+    expect(b.workList.currency).toBe("USD");
+    expect(b.workList.items.map((i) => [i.kind, i.cost]).sort()).toEqual([["anodes", 180], ["coating", 42.6], ["coating", 53.25], ["coating", 88.75], ["sediment", 95], ["steel", 494.55]].sort());
+    expect(b.workList.totals.steel).toMatchObject({ cost: 494.55, included: 1 });
+    expect(b.workList.totals.coating).toMatchObject({ cost: 184.6, included: 3 });
+    expect(b.workList.totals.coating!.quantity).toBeCloseTo(5.2, 9);
+    expect(b.workList.totals.anodes).toMatchObject({ quantity: 1, cost: 180 });
+    expect(b.workList.totals.sediment).toMatchObject({ quantity: 1, cost: 95 });
+    expect(b.workList.grandTotal).toBe(954.15);
+    // The monitored crack has no quantity: the yard cannot price it, and the page says so.
+    expect(b.unpriced.map((u) => u.description)).toEqual([expect.stringMatching(/^Finding 4: /)]);
+  });
+});
+
+describe("deciding on items", () => {
+  const itemOf = async (kind: string, quantity: number) => (await body(await superintendent.request(`/api/v1/dockings/${dockingId}`))).workList.items.find((i) => i.kind === kind && i.quantity === quantity)!;
+
+  it("refuses an exclusion or an adjustment without a reason, and changes nothing", async () => {
+    const coating = await itemOf("coating", 1.2);
+    for (const decision of [{ included: false }, { included: true, adjustedQuantity: 3 }]) {
+      const res = await superintendent.request(`/api/v1/dockings/${dockingId}/items`, { method: "PUT", json: { items: [{ id: coating.id, ...decision }] } });
+      expect(res.status).toBe(400);
+      const e = (await res.json()) as { error: { issues: { path: string }[] } };
+      expect(e.error.issues.map((i) => i.path)).toEqual(["items.0.adjustmentReason"]);
+    }
+    expect(await testDb().$count(auditLog, and(eq(auditLog.orgId, s.org.id), eq(auditLog.action, "docking_item.decide")))).toBe(0);
+    expect((await itemOf("coating", 1.2)).included).toBe(true);
+  });
+
+  it("excludes and adjusts with reasons, audit-logs each change, and prices again", async () => {
+    const coating = await itemOf("coating", 1.2);
+    const sediment = await itemOf("sediment", 1);
+    const res = await superintendent.request(`/api/v1/dockings/${dockingId}/items`, {
+      method: "PUT",
+      json: {
+        items: [
+          { id: coating.id, included: false, adjustmentReason: "Touched up by the crew at sea" },
+          { id: sediment.id, included: true, adjustedQuantity: 3, adjustmentReason: "Yard survey found more mud, \"about 3 m³\"" },
+        ],
+      },
+    });
+    const b = await body(res);
+    // coating 2.5 + 1.5 = 4.0 m² × 35.50 = 142.00; sediment 3 m³ × 95.00 = 285.00;
+    // grand total 494.55 + 142.00 + 180.00 + 285.00 = 1101.55
+    expect(b.workList.totals.coating).toMatchObject({ cost: 142, included: 2, excluded: 1 });
+    expect(b.workList.totals.sediment).toMatchObject({ quantity: 3, cost: 285 });
+    expect(b.workList.grandTotal).toBe(1101.55);
+    const logs = await testDb().select().from(auditLog).where(and(eq(auditLog.orgId, s.org.id), eq(auditLog.action, "docking_item.decide")));
+    expect(logs.map((l) => l.entityId).sort()).toEqual([coating.id, sediment.id].sort());
+    const sedimentLog = logs.find((l) => l.entityId === sediment.id)!.detail as { before: { adjustedQuantity: number | null }; after: { adjustedQuantity: number; adjustmentReason: string } };
+    expect(sedimentLog.before.adjustedQuantity).toBeNull();
+    expect(sedimentLog.after).toMatchObject({ adjustedQuantity: 3, adjustmentReason: "Yard survey found more mud, \"about 3 m³\"" });
+  });
+
+  it("keeps the decisions when the list is gathered again", async () => {
+    const res = await superintendent.request(`/api/v1/dockings/${dockingId}/rebuild`, { method: "POST" });
+    const b = await body(res);
+    expect(b.workList.grandTotal).toBe(1101.55);
+    expect(b.workList.items).toHaveLength(6);
+  });
+
+  it("exports the CSV: header, items, totals per kind, grand total, with quoting", async () => {
+    const res = await superintendent.request(`/api/v1/dockings/${dockingId}/work-list.csv`);
+    expect(res.status).toBe(200);
+    expect(res.headers.get("content-type")).toBe("text/csv; charset=utf-8");
+    expect(res.headers.get("content-disposition")).toMatch(/^attachment; filename="work-list-.*-2027-04-12\.csv"$/);
+    const lines = (await res.text()).split("\r\n");
+    expect(lines.pop()).toBe("");
+    const t = "No. 1 WBT P";
+    expect(lines).toEqual([
+      "Tank,Kind,Description,Included,Quantity gathered,Adjusted quantity,Quantity priced,Unit,Unit rate,Currency,Cost,Reason",
+      `${t},Steel renewal,"Finding 3: Pitting, Fr. 90–91, Bottom shell plating: steel renewal (insert plate)",yes,117.75,,117.75,kg,4.2,USD,494.55,`,
+      `${t},Coating repair,"Finding 1: Local coating breakdown, Fr. 82–85, Inner bottom plating: coating repair (coating touch-up)",yes,2.5,,2.5,m²,35.5,USD,88.75,`,
+      `${t},Coating repair,"Finding 2: Local coating breakdown, Fr. 88–89, Bottom shell plating: coating repair (coating touch-up)",no,1.2,,1.2,m²,35.5,USD,42.60,Touched up by the crew at sea`,
+      `${t},Coating repair,"Finding 3: Pitting, Fr. 90–91, Bottom shell plating: coating repair (insert plate)",yes,1.5,,1.5,m²,35.5,USD,53.25,`,
+      `${t},Anode renewal,Anodes to renew,yes,1,,1,pcs,180,USD,180.00,`,
+      `${t},Sediment removal,"Sediment removal, 1 zone",yes,1,3,3,m³,95,USD,285.00,"Yard survey found more mud, ""about 3 m³"""`,
+      `Total,Steel renewal,"1 included, 0 excluded",,,,117.75,kg,,USD,494.55,`,
+      `Total,Coating repair,"2 included, 1 excluded",,,,4,m²,,USD,142.00,`,
+      `Total,Anode renewal,"1 included, 0 excluded",,,,1,pcs,,USD,180.00,`,
+      `Total,Sediment removal,"1 included, 0 excluded",,,,3,m³,,USD,285.00,`,
+      `Grand total,,"${s.ownVessel.name}, Test Yard Shipbuilding, Test Harbour, Berth 3, planned 2027-04-12",,,,,,,USD,1101.55,`,
+    ]);
+  });
+
+  it("refuses any change once the docking is completed", async () => {
+    await testDb().update(dockings).set({ status: "completed" }).where(eq(dockings.id, dockingId));
+    const sediment = await itemOf("sediment", 1);
+    const put = await superintendent.request(`/api/v1/dockings/${dockingId}/items`, { method: "PUT", json: { items: [{ id: sediment.id, included: true }] } });
+    expect(put.status).toBe(409);
+    expect((await superintendent.request(`/api/v1/dockings/${dockingId}/rebuild`, { method: "POST" })).status).toBe(409);
+    expect((await itemOf("sediment", 1)).adjustedQuantity).toBe(3);
+  });
+});
+
+describe("bad input and strangers", () => {
+  const post = (c: TClient, vesselId: string, json: unknown) => c.request(`/api/v1/vessels/${vesselId}/dockings`, { method: "POST", json });
+
+  it.each([
+    ["steelRatePerKg", { steelRatePerKg: -1 }],
+    ["coatingRatePerM2", { coatingRatePerM2: "lots" }],
+    ["anodeRatePerPiece", { anodeRatePerPiece: null }],
+    ["currency", { currency: "EURO" }],
+    ["currency", { currency: "ZZZ" }],
+    ["plannedOn", { plannedOn: "2027-02-30" }],
+  ])("refuses a bad %s with 400 naming the field, and saves nothing", async (field, change) => {
+    const before = await dockingCount(s.ownVessel.id);
+    const res = await post(superintendent, s.ownVessel.id, { ...DOCKING, ...change });
+    expect(res.status).toBe(400);
+    const e = (await res.json()) as { error: { issues: { path: string }[] } };
+    expect(e.error.issues.map((i) => i.path)).toEqual([field]);
+    expect(await dockingCount(s.ownVessel.id)).toBe(before);
+  });
+
+  it("refuses the vessel's officer and master (403) and another company (404)", async () => {
+    const before = await dockingCount(s.ownVessel.id);
+    for (const c of [officer, master]) {
+      expect((await post(c, s.ownVessel.id, DOCKING)).status).toBe(403);
+      expect((await c.request(`/api/v1/dockings/${dockingId}`)).status).toBe(403);
+      expect((await c.request(`/api/v1/dockings/${dockingId}/work-list.csv`)).status).toBe(403);
+    }
+    expect((await post(otherAdmin, s.ownVessel.id, DOCKING)).status).toBe(404);
+    for (const path of [`/api/v1/dockings/${dockingId}`, `/api/v1/dockings/${dockingId}/work-list.csv`]) {
+      const res = await otherAdmin.request(path);
+      expect(res.status).toBe(404);
+      expect(await res.text()).not.toContain(s.ownVessel.name);
+    }
+    expect((await otherAdmin.request(`/api/v1/dockings/${dockingId}/rebuild`, { method: "POST" })).status).toBe(404);
+    expect(await dockingCount(s.ownVessel.id)).toBe(before);
+  });
+
+  it("answers 404 for an unknown docking or an item of another docking", async () => {
+    expect((await superintendent.request(`/api/v1/dockings/${randomUUID()}`)).status).toBe(404);
+    expect((await superintendent.request(`/api/v1/dockings/not-an-id`)).status).toBe(404);
+    const res = await superintendent.request(`/api/v1/vessels/${s.siblingVessel.id}/dockings`, { method: "POST", json: DOCKING });
+    const sibling = ((await res.json()) as { docking: { id: string } }).docking.id;
+    const [item] = await testDb().select().from(dockingItems).where(eq(dockingItems.dockingId, dockingId));
+    const put = await superintendent.request(`/api/v1/dockings/${sibling}/items`, { method: "PUT", json: { items: [{ id: item!.id, included: false, adjustmentReason: "Not ours" }] } });
+    expect(put.status).toBe(404);
+  });
+});

@@ -1,0 +1,50 @@
+import { describe, expect, it } from "vitest";
+import { csvField, csvMoney, csvQuantity, defuseFormula, workListCsv } from "@/lib/office/work-list-csv";
+import { priceWorkList } from "@/lib/office/work-list";
+
+describe("CSV fields (RFC 4180)", () => {
+  it("quotes a field with a comma, a quote or a line break, doubling quotes", () => {
+    expect(csvField("plain")).toBe("plain");
+    expect(csvField("a, b")).toBe('"a, b"');
+    expect(csvField('say "3 m³"')).toBe('"say ""3 m³"""');
+    expect(csvField("two\nlines")).toBe('"two\nlines"');
+  });
+
+  it("keeps a spreadsheet from running typed text as a formula", () => {
+    expect(defuseFormula("=SUM(A1:A9)")).toBe("'=SUM(A1:A9)");
+    expect(defuseFormula("@cmd")).toBe("'@cmd");
+    expect(defuseFormula("Yard survey")).toBe("Yard survey");
+  });
+
+  it("writes money to the currency's minor unit and quantities to 3 decimals", () => {
+    expect(csvMoney(42.6, 2)).toBe("42.60");
+    expect(csvMoney(1500, 0)).toBe("1500");
+    expect(csvQuantity(117.75000000000001)).toBe("117.75");
+    expect(csvQuantity(0.1234)).toBe("0.123");
+  });
+});
+
+describe("workListCsv", () => {
+  it("writes a header, the items, a total per kind and the grand total, CRLF-terminated", () => {
+    const list = priceWorkList(
+      [
+        { key: "a", kind: "coating" as const, quantity: 2, tankCode: "No. 2 WBT S", description: "Finding 1: x, y", unit: "m²" },
+        { key: "b", kind: "anodes" as const, quantity: 3, tankCode: "No. 2 WBT S", description: "Anodes to renew", unit: "pcs", included: false, adjustmentReason: "=renewed already" },
+      ],
+      { currency: "JPY", steelRatePerKg: 500, coatingRatePerM2: 4000.4, anodeRatePerPiece: 20000, sedimentRatePerM3: 9000 },
+    );
+    const lines = workListCsv(list, { vesselName: "Test Vessel", yard: "Yard", place: "Port", plannedOn: "2027-01-01" }).split("\r\n");
+    // coating 2 m² × 4000.4 = 8000.8 → 8001 yen (JPY has no minor unit)
+    expect(lines).toEqual([
+      "Tank,Kind,Description,Included,Quantity gathered,Adjusted quantity,Quantity priced,Unit,Unit rate,Currency,Cost,Reason",
+      'No. 2 WBT S,Coating repair,"Finding 1: x, y",yes,2,,2,m²,4000.4,JPY,8001,',
+      "No. 2 WBT S,Anode renewal,Anodes to renew,no,3,,3,pcs,20000,JPY,60000,'=renewed already",
+      'Total,Steel renewal,"0 included, 0 excluded",,,,0,kg,,JPY,0,',
+      'Total,Coating repair,"1 included, 0 excluded",,,,2,m²,,JPY,8001,',
+      'Total,Anode renewal,"0 included, 1 excluded",,,,0,pcs,,JPY,0,',
+      'Total,Sediment removal,"0 included, 0 excluded",,,,0,m³,,JPY,0,',
+      'Grand total,,"Test Vessel, Yard, Port, planned 2027-01-01",,,,,,,JPY,8001,',
+      "",
+    ]);
+  });
+});
