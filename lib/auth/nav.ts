@@ -10,5 +10,6 @@ export function navLinks(memberships: readonly TMembershipLike[]) {
   }
   if (roles.has("surveyor")) links.push({ href: "/shared", label: "Shared reports" });
   if (roles.has("admin")) links.push({ href: "/admin", label: "Administration" });
+  if (roles.has("superintendent") || roles.has("admin")) links.push({ href: "/account", label: "API tokens" });
   return links;
 }

@@ -72,6 +72,16 @@ function vesselBody(s: TScenario, scope: TScope) {
 
 const CASES: TCase[] = [
   { name: "GET /api/v1/me", path: () => "/api/v1/me", scopes: ["own"], expect: (w) => (w === "anonymous" ? 401 : 200) },
+  { name: "GET /api/v1/me/tokens", path: () => "/api/v1/me/tokens", scopes: ["own"], expect: (w) => (w === "anonymous" ? 401 : office(w) ? 200 : 403) },
+  {
+    name: "POST /api/v1/me/tokens", method: "POST", path: () => "/api/v1/me/tokens", scopes: ["own"],
+    body: () => ({ name: "Matrix token" }), expect: (w) => (w === "anonymous" ? 401 : office(w) ? 201 : 403),
+  },
+  {
+    name: "DELETE /api/v1/me/tokens/:id (not one's own)", method: "DELETE", path: () => "/api/v1/me/tokens/00000000-0000-4000-8000-000000000000", scopes: ["own"],
+    expect: (w) => (w === "anonymous" ? 401 : office(w) ? 404 : 403),
+  },
+  { name: "page /account (API tokens)", path: () => "/account", scopes: ["own"], expect: page((w) => office(w)) },
   { name: "GET /api/v1/vessels", path: () => "/api/v1/vessels", scopes: ["own"], expect: (w) => (w === "anonymous" ? 401 : 200) },
   {
     name: "POST /api/v1/vessels", method: "POST", path: () => "/api/v1/vessels", scopes: ["own"],

@@ -62,6 +62,6 @@ describe("visible vessels", () => {
 
   it("navigation follows the roles", () => {
     expect(navLinks([{ orgId: A, role: "surveyor", vesselId: null }]).map((l) => l.href)).toEqual(["/shared"]);
-    expect(navLinks([{ orgId: A, role: "admin", vesselId: null }]).map((l) => l.href)).toEqual(["/fleet", "/vessels", "/admin"]);
+    expect(navLinks([{ orgId: A, role: "admin", vesselId: null }]).map((l) => l.href)).toEqual(["/fleet", "/vessels", "/admin", "/account"]);
   });
 });
