@@ -12,9 +12,11 @@ import { validateInput } from "@/lib/http/route";
 import { workListCsv } from "@/lib/office/work-list-csv";
 import { gatherWorkItems, priceWorkList, WORK_KINDS, type TWorkKind, type TWorkSource } from "@/lib/office/work-list";
 import { ZDockingInput, ZDockingItemDecisionInput } from "@/lib/schemas/docking";
+import type { TRole } from "@/lib/vocabulary";
 
 /** Who plans dockings and reads their work lists: the office. */
 export const DOCKING_PLANNERS = ["superintendent", "admin"] as const;
+export const canPlanDockings = (roles: readonly TRole[]) => roles.some((r) => (DOCKING_PLANNERS as readonly TRole[]).includes(r));
 
 const ZId = z.uuid();
 

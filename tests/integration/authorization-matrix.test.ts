@@ -2,7 +2,7 @@
 // vessel of the same company / other company → the expected status.
 import { eq } from "drizzle-orm";
 import { beforeAll, describe, expect, it } from "vitest";
-import { memberships } from "@/db/schema";
+import { dockings, memberships } from "@/db/schema";
 import type { TRole } from "@/lib/vocabulary";
 import { anonymousClient, signIn, type TClient } from "../fixtures/http";
 import { buildScenario, fakeImo, PASSWORD, testDb, type TScenario } from "../fixtures/scenario";
@@ -57,6 +57,12 @@ const recipientEditor = (ok: number) => (who: TWho, scope: TScope) => {
   if (read !== 200) return read;
   return who === "superintendent" || who === "admin" ? ok : 403;
 };
+/** Plan dockings and read their work lists: the office only. */
+const dockingPlanner = recipientEditor;
+/** One docking per vessel of the scenario, made in beforeAll. */
+const dockingOf = new Map<string, string>();
+const dockingPath = (s: TScenario, scope: TScope) => `/api/v1/dockings/${dockingOf.get(vesselOf(s, scope).id)}`;
+const DOCKING_BODY = { yard: "Matrix Yard", place: "Matrix port", plannedOn: "2027-01-10", currency: "USD", steelRatePerKg: 1, coatingRatePerM2: 1, anodeRatePerPiece: 1, sedimentRatePerM3: 1 };
 const adminOnly = (ok: number) => (who: TWho) => (who === "anonymous" ? 401 : who === "admin" ? ok : 403);
 const adminOnlyScoped = (ok: number) => (who: TWho, scope: TScope) =>
   who === "anonymous" ? 401 : who !== "admin" ? 403 : scope === "other" ? 404 : ok;
@@ -249,6 +255,18 @@ const CASES: TCase[] = [
     name: "DELETE /api/v1/vessels/:id/recipients/:recipientId (unknown recipient)", method: "DELETE", path: (s, sc) => `/api/v1/vessels/${vesselOf(s, sc).id}/recipients/${crypto.randomUUID()}`,
     scopes: ["own", "sibling", "other"], expect: recipientEditor(404),
   },
+  { name: "GET /api/v1/vessels/:id/dockings", path: (s, sc) => `/api/v1/vessels/${vesselOf(s, sc).id}/dockings`, scopes: ["own", "sibling", "other"], expect: dockingPlanner(200) },
+  { name: "POST /api/v1/vessels/:id/dockings", method: "POST", path: (s, sc) => `/api/v1/vessels/${vesselOf(s, sc).id}/dockings`, body: () => DOCKING_BODY, scopes: ["own", "sibling", "other"], expect: dockingPlanner(201) },
+  { name: "GET /api/v1/dockings/:id", path: dockingPath, scopes: ["own", "sibling", "other"], expect: dockingPlanner(200) },
+  {
+    name: "PUT /api/v1/dockings/:id/items (unknown item)", method: "PUT", path: (s, sc) => `${dockingPath(s, sc)}/items`,
+    body: () => ({ items: [{ id: crypto.randomUUID(), included: true }] }), scopes: ["own", "sibling", "other"], expect: dockingPlanner(404),
+  },
+  { name: "POST /api/v1/dockings/:id/rebuild", method: "POST", path: (s, sc) => `${dockingPath(s, sc)}/rebuild`, scopes: ["own", "sibling", "other"], expect: dockingPlanner(200) },
+  { name: "GET /api/v1/dockings/:id/work-list.csv", path: (s, sc) => `${dockingPath(s, sc)}/work-list.csv`, scopes: ["own", "sibling", "other"], expect: dockingPlanner(200) },
+  { name: "page /vessels/:id/dockings", path: (s, sc) => `/vessels/${vesselOf(s, sc).id}/dockings`, scopes: ["own", "sibling", "other"], expect: page((w, sc) => office(w) && sc !== "other") },
+  { name: "page /vessels/:id/dockings/new", path: (s, sc) => `/vessels/${vesselOf(s, sc).id}/dockings/new`, scopes: ["own", "sibling", "other"], expect: page((w, sc) => office(w) && sc !== "other") },
+  { name: "page /dockings/:id", path: (s, sc) => `/dockings/${dockingOf.get(vesselOf(s, sc).id)}`, scopes: ["own", "sibling", "other"], expect: page((w, sc) => office(w) && sc !== "other") },
   { name: "page /inspections/:id", path: (s, sc) => `/inspections/${s.inspectionOf(vesselOf(s, sc).id)}`, scopes: ["own", "sibling", "other"], expect: (w, sc) => (w === "anonymous" ? 307 : vesselReader(w, sc)) },
   { name: "page /inspections/:id/report", path: (s, sc) => `/inspections/${s.inspectionOf(vesselOf(s, sc).id)}/report`, scopes: ["own", "sibling", "other"], expect: (w, sc) => (w === "anonymous" ? 307 : vesselReader(w, sc)) },
   {
@@ -291,6 +309,10 @@ const clients = new Map<TWho, TClient>();
 
 beforeAll(async () => {
   scenario = await buildScenario();
+  for (const v of [scenario.ownVessel, scenario.siblingVessel, scenario.otherVessel]) {
+    const [d] = await testDb().insert(dockings).values({ orgId: v.orgId, vesselId: v.id, ...DOCKING_BODY }).returning({ id: dockings.id });
+    dockingOf.set(v.id, d!.id);
+  }
   clients.set("anonymous", anonymousClient());
   for (const role of ROLES) clients.set(role, await signIn(scenario.users[role].email, PASSWORD));
 });

@@ -10,6 +10,7 @@ import { DrawingList } from "@/components/vessels/drawing-list";
 import { RecipientList } from "@/components/vessels/recipient-list";
 import { listRecipientsAs } from "@/lib/services/recipients";
 import { listDrawingsAs } from "@/lib/services/drawings";
+import { canPlanDockings } from "@/lib/services/dockings";
 import { canInspect, listInspectionsAs } from "@/lib/services/inspections";
 import { canEditStructure, readVesselTanks } from "@/lib/services/tanks";
 import { VESSEL_TYPE_LABELS } from "@/lib/vocabulary";
@@ -34,6 +35,7 @@ export default async function VesselPage({ params }: { params: Promise<{ vesselI
           canEdit ? (
             <>
               {mayInspect ? <Link href={`/vessels/${vesselId}/inspections/new`} className="rounded-md bg-hull-700 px-3 py-2 text-sm font-semibold text-white hover:bg-hull-800">Start an inspection</Link> : null}
+              {canPlanDockings(roles) ? <Link href={`/vessels/${vesselId}/dockings`} className={linkButton}>Dockings</Link> : null}
               <Link href={`/vessels/${vesselId}/edit`} className={linkButton}>Edit particulars</Link>
               <Link href={`/vessels/${vesselId}/tanks/import`} className={linkButton}>Import tanks (CSV)</Link>
               <Link href={`/vessels/${vesselId}/tanks/new`} className="rounded-md bg-hull-700 px-3 py-2 text-sm font-semibold text-white hover:bg-hull-800">New tank</Link>

@@ -1,0 +1,41 @@
+import type { Page } from "playwright-core";
+
+/** The docking pages: the new-docking form and the work list. */
+export class WorkListPage {
+  constructor(private readonly page: Page, private readonly baseUrl: string) {}
+
+  async planDocking(vesselId: string, fields: Record<string, string>) {
+    await this.page.goto(`${this.baseUrl}/vessels/${vesselId}/dockings`);
+    await this.page.getByRole("link", { name: "Plan a docking" }).click();
+    for (const [label, value] of Object.entries(fields)) await this.page.getByLabel(label, { exact: true }).fill(value);
+    await this.page.getByRole("button", { name: "Create docking and gather the work list" }).click();
+    await this.page.waitForURL(/\/dockings\/[0-9a-f-]{36}$/);
+    await this.grandTotal().waitFor();
+  }
+
+  grandTotal() {
+    return this.page.getByTestId("grand-total");
+  }
+
+  total(kind: string) {
+    return this.page.getByTestId(`total-${kind}`);
+  }
+
+  async adjust(description: RegExp, quantity: string, reason: string) {
+    const row = this.page.getByTestId("work-item").filter({ hasText: description });
+    await row.getByRole("button", { name: /^Change/ }).click();
+    await row.getByLabel(/Adjusted quantity/).fill(quantity);
+    await row.getByLabel("Reason").fill(reason);
+    await row.getByRole("button", { name: "Save" }).click();
+    await this.page.getByText("Saved; the totals are priced again.").waitFor();
+  }
+
+  /** Clicks "Export CSV" and returns the downloaded file's name and text. */
+  async exportCsv() {
+    const [download] = await Promise.all([this.page.waitForEvent("download"), this.page.getByRole("link", { name: "Export CSV" }).click()]);
+    const stream = await download.createReadStream();
+    const chunks: Buffer[] = [];
+    for await (const chunk of stream) chunks.push(chunk as Buffer);
+    return { fileName: download.suggestedFilename(), text: Buffer.concat(chunks).toString("utf8") };
+  }
+}

@@ -1,0 +1,66 @@
+// The superintendent plans a docking in Chromium, sees the work list gathered
+// from a countersigned report with its totals, adjusts an item with a reason,
+// and downloads the CSV.
+import path from "node:path";
+import { eq } from "drizzle-orm";
+import type { Browser } from "playwright-core";
+import { afterAll, beforeAll, describe, expect, it } from "vitest";
+import { inspections } from "@/db/schema";
+import { fillInspection } from "@/db/seed/complete-inspection";
+import { launchBrowser } from "../fixtures/browser";
+import { testEnv } from "../fixtures/env";
+import { buildScenario, PASSWORD, testDb, type TScenario } from "../fixtures/scenario";
+import { signedInTabletPage } from "./pages/sign-in-page";
+import { WorkListPage } from "./pages/work-list-page";
+
+const ARTIFACTS = path.join(import.meta.dirname, "..", "artifacts");
+let browser: Browser;
+let s: TScenario;
+
+beforeAll(async () => {
+  s = await buildScenario();
+  const inspectionId = s.inspectionOf(s.ownVessel.id);
+  await fillInspection(testDb(), { orgId: s.org.id, inspectionId, frameFrom: s.tankOf(s.ownVessel.id).frameFrom, testedAt: new Date("2026-11-20T08:00:00Z"), measuredBy: "Test officer", standbyPerson: "Test bosun" });
+  await testDb().update(inspections).set({ status: "countersigned", countersignedAt: new Date("2026-11-21T10:00:00Z"), lockedAt: new Date("2026-11-21T10:00:00Z") }).where(eq(inspections.id, inspectionId));
+  browser = await launchBrowser();
+});
+afterAll(async () => {
+  await browser?.close();
+});
+
+describe("the docking work list in Chromium", () => {
+  it("plans a docking, sees the totals, adjusts an item and downloads the CSV", async () => {
+    const { baseUrl } = testEnv();
+    const page = await signedInTabletPage(browser, baseUrl, s.users.superintendent.email, PASSWORD);
+    const workList = new WorkListPage(page, baseUrl);
+    await workList.planDocking(s.ownVessel.id, {
+      Yard: "Test Yard Shipbuilding",
+      Place: "Test Harbour",
+      "Planned date": "2027-04-12",
+      Currency: "USD",
+      "Steel renewal, per kg": "4.20",
+      "Coating repair, per m²": "35.50",
+      "Anode renewal, per piece": "180",
+      "Sediment removal, per m³": "95",
+    });
+    // fillInspection: coating 2.5 + 1.2 = 3.7 m² × 35.50 = 131.35; 1 anode × 180.00; 50 mm × 20 m² = 1.0 m³ × 95.00;
+    // grand total 131.35 + 180.00 + 95.00 = 406.35 (no steel)
+    expect(await workList.total("coating").textContent()).toContain("$131.35");
+    expect(await workList.total("steel").textContent()).toContain("$0.00");
+    expect(await workList.grandTotal().textContent()).toContain("$406.35");
+    await workList.adjust(/Sediment removal/, "3", "Yard survey found more mud");
+    // sediment 3 m³ × 95.00 = 285.00; grand total 131.35 + 180.00 + 285.00 = 596.35
+    expect(await workList.total("sediment").textContent()).toContain("$285.00");
+    expect(await workList.grandTotal().textContent()).toContain("$596.35");
+    await page.screenshot({ path: path.join(ARTIFACTS, "work-list.png"), fullPage: true });
+
+    const { fileName, text } = await workList.exportCsv();
+    expect(fileName).toMatch(/^work-list-.*-2027-04-12\.csv$/);
+    const lines = text.split("\r\n");
+    expect(lines[0]).toBe("Tank,Kind,Description,Included,Quantity gathered,Adjusted quantity,Quantity priced,Unit,Unit rate,Currency,Cost,Reason");
+    expect(lines).toContain("No. 1 WBT P,Sediment removal,\"Sediment removal, 1 zone\",yes,1,3,3,m³,95,USD,285.00,Yard survey found more mud");
+    expect(lines).toContain("Total,Coating repair,\"2 included, 0 excluded\",,,,3.7,m²,,USD,131.35,");
+    expect(lines.at(-2)).toMatch(/^Grand total,,".*",,,,,,,USD,596\.35,$/);
+    await page.close();
+  }, 120_000);
+});
