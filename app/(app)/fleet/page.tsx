@@ -1,23 +1,85 @@
 import type { Metadata } from "next";
+import { FleetCounts } from "@/components/fleet/fleet-counts";
+import { FleetFilters } from "@/components/fleet/fleet-filters";
+import { FleetPager } from "@/components/fleet/fleet-pager";
+import { FleetTankTable } from "@/components/fleet/fleet-tank-table";
+import { RatingMark } from "@/components/fleet/rating-mark";
 import { VesselTable } from "@/components/fleet/vessel-table";
-import { PageHeader } from "@/components/ui/page-header";
 import { Notice } from "@/components/ui/notice";
-import { authorizeOrg } from "@/lib/auth/authorize";
-import { pageActor, pageAuthorize } from "@/lib/auth/page";
+import { PageHeader } from "@/components/ui/page-header";
+import { DUE_SOON_DAYS } from "@/db/queries/fleet";
 import { listVessels } from "@/db/queries/vessels";
+import { pageActor, pageAuthorize } from "@/lib/auth/page";
+import type { TFleetQuery } from "@/lib/schemas/fleet";
+import { authorizeFleetQuery, getFleetOverviewAs, resolveFleetScope } from "@/lib/services/fleet";
 
 export const metadata: Metadata = { title: "Fleet" };
 
-export default async function FleetPage() {
+type TSearch = Record<string, string | string[] | undefined>;
+const one = (v: string | string[] | undefined) => (Array.isArray(v) ? v[0] : v);
+
+function fleetHref(q: Partial<TFleetQuery>) {
+  const p = new URLSearchParams();
+  if (q.vessel) p.set("vessel", q.vessel);
+  if (q.rating) p.set("rating", q.rating);
+  if (q.dueWithin !== undefined) p.set("dueWithin", String(q.dueWithin));
+  if (q.page && q.page > 1) p.set("page", String(q.page));
+  if (q.pageSize && q.pageSize !== 50) p.set("pageSize", String(q.pageSize));
+  const s = p.toString();
+  return s ? `/fleet?${s}` : "/fleet";
+}
+
+export default async function FleetPage({ searchParams }: { searchParams: Promise<TSearch> }) {
   const actor = await pageActor();
-  const { orgId } = await pageAuthorize(() => authorizeOrg({ actor, allow: ["superintendent", "admin"] }));
-  const vessels = await listVessels({ orgId });
+  const params = await searchParams;
+  const parsed = await pageAuthorize(() => authorizeFleetQuery(actor, params));
+  const raw = { vessel: one(params.vessel), rating: one(params.rating), dueWithin: one(params.dueWithin) };
+
+  if (!parsed.success) {
+    const { orgId, vesselIds } = await pageAuthorize(() => resolveFleetScope(actor));
+    const vessels = await listVessels({ orgId, vesselIds: vesselIds ?? undefined });
+    return (
+      <>
+        <PageHeader title="Fleet" />
+        <div className="space-y-4">
+          <Notice tone="error" title="These filters cannot be used">
+            <ul className="list-disc pl-5">
+              {parsed.error.issues.map((i, n) => (
+                <li key={n}>{i.message}</li>
+              ))}
+            </ul>
+          </Notice>
+          <FleetFilters vessels={vessels} values={{ ...raw, vessel: vessels.some((v) => v.id === raw.vessel) ? raw.vessel : undefined }} />
+        </div>
+      </>
+    );
+  }
+
+  const q = parsed.data;
+  const overview = await getFleetOverviewAs(actor, q);
+  const scopeName = q.vessel ? overview.vessels.find((v) => v.id === q.vessel)?.name : undefined;
+  const showVesselList = !q.vessel && overview.vessels.length > 1;
   return (
     <>
-      <PageHeader title="Fleet" subtitle={`${vessels.length} vessels · ${vessels.reduce((n, v) => n + v.tankCount, 0)} ballast tanks on the structure maps`} />
+      <PageHeader
+        title={scopeName ? `Fleet · ${scopeName}` : "Fleet"}
+        subtitle={`${overview.vessels.length} vessel${overview.vessels.length === 1 ? "" : "s"} · ${overview.counts.tanks} ballast tanks · dates as of ${overview.today} (UTC)`}
+      />
       <div className="space-y-4">
-        <VesselTable vessels={vessels} />
-        <Notice>Ratings, due dates and the docking work list appear here once inspections are countersigned.</Notice>
+        <FleetCounts counts={overview.counts} dueSoonDays={DUE_SOON_DAYS} hrefFor={(f) => fleetHref({ vessel: q.vessel, ...f })} />
+        <FleetFilters vessels={overview.vessels} values={{ ...raw }} />
+        <p className="flex flex-wrap gap-4 text-xs text-slate-600" aria-label="Legend">
+          <RatingMark kind="GOOD" /> <RatingMark kind="FAIR" /> <RatingMark kind="POOR" /> <RatingMark kind="never" />
+          <span>Ratings from the latest countersigned report; a tank takes the rating of its worst area (IMO MSC.1/Circ.1330).</span>
+        </p>
+        {overview.tanks.length ? <FleetTankTable tanks={overview.tanks} /> : <Notice>No tank matches these filters.</Notice>}
+        <FleetPager {...overview.paging} hrefFor={(page) => fleetHref({ ...q, page })} />
+        {showVesselList ? (
+          <section className="space-y-2">
+            <h2 className="text-lg font-semibold text-hull-900">Vessels</h2>
+            <VesselTable vessels={await listVessels({ orgId: overview.orgId, vesselIds: overview.vessels.map((v) => v.id) })} />
+          </section>
+        ) : null}
       </div>
     </>
   );

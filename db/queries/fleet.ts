@@ -1,0 +1,183 @@
+import "server-only";
+// The fleet overview in SQL: every tank in scope with its latest countersigned
+// inspection (a lateral join that walks inspections_tank_idx: org_id, tank_id,
+// inspected_on, newest first), the coating rating of that inspection's worst
+// area, the interval that applies (the vessel's own inspection_intervals row,
+// else the company's) and the due date. Filters, ordering, LIMIT/OFFSET and the
+// counts run in the database: no page loads the fleet into memory.
+//
+// Rating and due date are computed here to filter, count and page. The rows
+// shown are rated again by lib/calc/coating.ts and dated by
+// lib/office/due-dates.ts, where the rules live; tests/integration/fleet.test.ts
+// checks that the two agree at every threshold.
+import { and, eq, inArray, sql, type SQL } from "drizzle-orm";
+import { db } from "@/db";
+import { coatingAreas } from "@/db/schema";
+import type { TTwentyPercentRule } from "@/lib/calc/coating";
+import type { TCoatingSystem } from "@/lib/office/due-dates";
+import type { TFleetRatingFilter } from "@/lib/schemas/fleet";
+import type { TCoatingArea, TTankKind, TTankSide, TVesselType } from "@/lib/vocabulary";
+
+export type TFleetScope = {
+  orgId: string;
+  /** null: every vessel of the company; otherwise these vessels only. */
+  vesselIds: readonly string[] | null;
+  twentyPercentRule: TTwentyPercentRule;
+  /** The calendar day (YYYY-MM-DD, UTC) that "overdue" and "due within" count from. */
+  today: string;
+};
+export type TFleetFilters = { rating?: TFleetRatingFilter; dueWithin?: number };
+
+/** Days ahead that the "due within 30 days" count looks. */
+export const DUE_SOON_DAYS = 30;
+
+/** Rank of one coating area, 0 GOOD, 1 FAIR, 2 POOR: the thresholds of rateCoatingArea (IMO MSC.1/Circ.1330 §4.1.3 Table 1). */
+const areaRank = (rule: TTwentyPercentRule) => sql`
+  case
+    when greatest(ca.breakdown_pct, ca.rusted_pct) > 20
+      or (${rule === "wording"}::boolean and greatest(ca.breakdown_pct, ca.rusted_pct) >= 20)
+      or ca.hard_scale_pct >= 10
+      or coalesce(ca.edges_rusted_pct, 0) > 50 then 2
+    when greatest(ca.breakdown_pct, ca.rusted_pct) >= 3
+      or ca.hard_scale_pct > 0
+      or coalesce(ca.edges_rusted_pct, 0) >= 20 then 1
+    else 0
+  end`;
+
+/** `with … dated`: one row per tank in scope. Every table is read with the company in its where. */
+function datedTanks(scope: TFleetScope): SQL {
+  const { orgId, vesselIds } = scope;
+  const vesselWhere = vesselIds ? sql`and t.vessel_id in (${sql.join(vesselIds.map((id) => sql`${id}::uuid`), sql`, `)})` : sql``;
+  return sql`
+    with scoped as (
+      select t.id as tank_id, t.vessel_id, t.code, t.name as tank_name, t.kind, t.side, t.coating_system, t.sort_order,
+             v.name as vessel_name, v.vessel_type,
+             li.id as inspection_id, li.inspected_on, li.revision,
+             iv.default_months, iv.below_good_months,
+             (select max(${areaRank(scope.twentyPercentRule)}) from coating_areas ca
+               where ca.org_id = ${orgId}::uuid and ca.inspection_id = li.id) as rating_rank
+      from tanks t
+      join vessels v on v.id = t.vessel_id and v.org_id = ${orgId}::uuid
+      left join lateral (
+        select i.id, i.inspected_on, i.revision from inspections i
+        where i.org_id = ${orgId}::uuid and i.tank_id = t.id and i.status = 'countersigned'
+        order by i.inspected_on desc, i.revision desc
+        limit 1
+      ) li on true
+      left join lateral (
+        select ii.default_months, ii.below_good_months from inspection_intervals ii
+        where ii.org_id = ${orgId}::uuid and (ii.vessel_id = t.vessel_id or ii.vessel_id is null)
+        order by ii.vessel_id nulls last
+        limit 1
+      ) iv on true
+      where t.org_id = ${orgId}::uuid ${vesselWhere}
+    ), dated as (
+      select s.*,
+        case
+          when s.inspection_id is null or s.default_months is null then null
+          when s.rating_rank = 0 then (s.inspected_on + make_interval(months => s.default_months))::date
+          else (s.inspected_on + make_interval(months => least(s.below_good_months, s.default_months)))::date
+        end as due_on
+      from scoped s
+    )`;
+}
+
+function filterWhere(filters: TFleetFilters, today: string): SQL {
+  const parts: SQL[] = [sql`true`];
+  const rank = { GOOD: 0, FAIR: 1, POOR: 2 } as const;
+  if (filters.rating === "never") parts.push(sql`inspection_id is null`);
+  else if (filters.rating === "unrated") parts.push(sql`inspection_id is not null and rating_rank is null`);
+  else if (filters.rating) parts.push(sql`rating_rank = ${rank[filters.rating]}`);
+  // As isDueWithin: a tank never inspected (or with no interval set) is always due.
+  if (filters.dueWithin !== undefined) parts.push(sql`(due_on is null or due_on <= ${today}::date + ${filters.dueWithin}::int)`);
+  return sql.join(parts, sql` and `);
+}
+
+export type TFleetTankRow = {
+  tankId: string;
+  vesselId: string;
+  vesselName: string;
+  vesselType: TVesselType;
+  code: string;
+  tankName: string;
+  kind: TTankKind;
+  side: TTankSide;
+  coatingSystem: TCoatingSystem;
+  inspectionId: string | null;
+  inspectedOn: string | null;
+  revision: number | null;
+  intervals: { defaultMonths: number; belowGoodMonths: number } | null;
+  /** SQL's rank (0 GOOD, 1 FAIR, 2 POOR, null unrated): for the parity test; the page shows lib's rating. */
+  ratingRank: number | null;
+  dueOn: string | null;
+};
+
+/** One page of tanks, ordered by vessel, then the structure map's order, then code. */
+export async function listFleetTanks({ scope, filters, limit, offset }: { scope: TFleetScope; filters: TFleetFilters; limit: number; offset: number }): Promise<TFleetTankRow[]> {
+  const res = await db().execute<Record<string, unknown>>(sql`
+    ${datedTanks(scope)}
+    select tank_id, vessel_id, vessel_name, vessel_type, code, tank_name, kind, side, coating_system,
+           inspection_id, to_char(inspected_on, 'YYYY-MM-DD') as inspected_on, revision,
+           default_months, below_good_months, rating_rank, to_char(due_on, 'YYYY-MM-DD') as due_on
+    from dated
+    where ${filterWhere(filters, scope.today)}
+    order by vessel_name, vessel_id, sort_order, code, tank_id
+    limit ${limit} offset ${offset}`);
+  return res.rows.map((r) => ({
+    tankId: String(r.tank_id),
+    vesselId: String(r.vessel_id),
+    vesselName: String(r.vessel_name),
+    vesselType: r.vessel_type as TVesselType,
+    code: String(r.code),
+    tankName: String(r.tank_name),
+    kind: r.kind as TTankKind,
+    side: r.side as TTankSide,
+    coatingSystem: r.coating_system as TCoatingSystem,
+    inspectionId: (r.inspection_id as string | null) ?? null,
+    inspectedOn: (r.inspected_on as string | null) ?? null,
+    revision: r.revision === null ? null : Number(r.revision),
+    intervals: r.default_months === null ? null : { defaultMonths: Number(r.default_months), belowGoodMonths: Number(r.below_good_months) },
+    ratingRank: r.rating_rank === null ? null : Number(r.rating_rank),
+    dueOn: (r.due_on as string | null) ?? null,
+  }));
+}
+
+export type TFleetCounts = { tanks: number; overdue: number; dueSoon: number; poor: number; fair: number; good: number; unrated: number; neverInspected: number; matching: number };
+
+/** The counts at the top, over every tank in scope (not narrowed by the filters), and how many tanks the filters match. */
+export async function countFleetTanks({ scope, filters }: { scope: TFleetScope; filters: TFleetFilters }): Promise<TFleetCounts> {
+  const today = sql`${scope.today}::date`;
+  const res = await db().execute<Record<string, unknown>>(sql`
+    ${datedTanks(scope)}
+    select count(*)::int as tanks,
+           count(*) filter (where due_on < ${today})::int as overdue,
+           count(*) filter (where due_on >= ${today} and due_on <= ${today} + ${DUE_SOON_DAYS}::int)::int as due_soon,
+           count(*) filter (where rating_rank = 2)::int as poor,
+           count(*) filter (where rating_rank = 1)::int as fair,
+           count(*) filter (where rating_rank = 0)::int as good,
+           count(*) filter (where inspection_id is not null and rating_rank is null)::int as unrated,
+           count(*) filter (where inspection_id is null)::int as never_inspected,
+           count(*) filter (where ${filterWhere(filters, scope.today)})::int as matching
+    from dated`);
+  const r = res.rows[0]!;
+  const n = (k: string) => Number(r[k] ?? 0);
+  return { tanks: n("tanks"), overdue: n("overdue"), dueSoon: n("due_soon"), poor: n("poor"), fair: n("fair"), good: n("good"), unrated: n("unrated"), neverInspected: n("never_inspected"), matching: n("matching") };
+}
+
+/** The coating areas of the inspections on one page (at most a page's worth of inspections). */
+export async function listCoatingForInspections({ orgId, inspectionIds }: { orgId: string; inspectionIds: readonly string[] }) {
+  if (!inspectionIds.length) return [];
+  return db()
+    .select({
+      inspectionId: coatingAreas.inspectionId,
+      area: coatingAreas.area,
+      breakdownPct: coatingAreas.breakdownPct,
+      rustedPct: coatingAreas.rustedPct,
+      hardScalePct: coatingAreas.hardScalePct,
+      edgesRustedPct: coatingAreas.edgesRustedPct,
+    })
+    .from(coatingAreas)
+    .where(and(eq(coatingAreas.orgId, orgId), inArray(coatingAreas.inspectionId, [...inspectionIds]))) as Promise<
+    { inspectionId: string; area: TCoatingArea; breakdownPct: number; rustedPct: number; hardScalePct: number; edgesRustedPct: number | null }[]
+  >;
+}
