@@ -6,6 +6,7 @@ import { Button } from "@/components/ui/button";
 import { Notice } from "@/components/ui/notice";
 import { postJson } from "./api";
 import { DeliveryLog } from "./delivery-log";
+import { SharePanel } from "./share-panel";
 import { SignForm } from "./sign-form";
 
 type TSignature = { kind: "officer" | "master"; signerName: string; signerRank: string | null; typedSignature: string | null; signedAt: string; userId: string };
@@ -77,6 +78,7 @@ export function SigningPanel({ inspectionId, status, revision, state, actor }: {
             <p role="status">The signed PDF is being prepared; this page updates by itself.</p>
           )}
           {state.report ? <DeliveryLog inspectionId={inspectionId} canResend={state.roles.includes("superintendent") || state.roles.includes("admin")} /> : null}
+          {state.report ? <SharePanel inspectionId={inspectionId} /> : null}
           {isInspector && latest?.id === inspectionId && status === "countersigned" ? <ReviseButton inspectionId={inspectionId} next={revision + 1} /> : null}
         </div>
       ) : null}

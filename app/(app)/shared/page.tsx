@@ -1,4 +1,5 @@
 import type { Metadata } from "next";
+import { AcknowledgeForm } from "@/components/signing/acknowledge-form";
 import { PageHeader } from "@/components/ui/page-header";
 import { Notice } from "@/components/ui/notice";
 import { Cell, Table } from "@/components/ui/table";
@@ -19,7 +20,7 @@ export default async function SharedReportsPage() {
       {shares.length === 0 ? (
         <Notice>No report has been shared with you yet.</Notice>
       ) : (
-        <Table head={["Company", "Vessel", "Tank", "Inspected", "Revision", "Shared", "Acknowledged"]}>
+        <Table head={["Company", "Vessel", "Tank", "Inspected", "Revision", "Shared", "Signed PDF", "Acknowledged"]}>
           {shares.map((s) => (
             <tr key={s.shareId}>
               <Cell>{s.company}</Cell>
@@ -30,7 +31,11 @@ export default async function SharedReportsPage() {
               <Cell>{s.inspectedOn}</Cell>
               <Cell>{s.revision}</Cell>
               <Cell>{formatDate(s.sharedAt)}</Cell>
-              <Cell>{s.acknowledgedAt ? formatDate(s.acknowledgedAt) : "not yet"}</Cell>
+              <Cell>
+                <a className="font-semibold underline" href={`/api/v1/shares/${s.shareId}/report`}>Read the PDF</a>
+                {s.sha256 ? <span className="block break-all font-mono text-[10px] text-slate-500">SHA-256 {s.sha256}</span> : null}
+              </Cell>
+              <Cell>{s.acknowledgedAt ? <>{formatDate(s.acknowledgedAt)}{s.acknowledgementComment ? <span className="block text-xs">“{s.acknowledgementComment}”</span> : null}</> : <AcknowledgeForm shareId={s.shareId} />}</Cell>
             </tr>
           ))}
         </Table>
