@@ -33,6 +33,12 @@ const inspector = (who: TWho, scope: TScope, ok: number) => {
   if (read !== 200) return read;
   return who === "officer" || who === "master" ? ok : 403;
 };
+/** Share a report with class: the office (superintendent, admin) of the vessel's company. */
+const officeOnly = (who: TWho, scope: TScope, ok: number) => {
+  const read = vesselReader(who, scope);
+  if (read !== 200) return read;
+  return who === "superintendent" || who === "admin" ? ok : 403;
+};
 /** Countersign or return a report: the vessel's master only. */
 const countersigner = (who: TWho, scope: TScope, ok: number) => {
   const read = vesselReader(who, scope);
@@ -88,6 +94,7 @@ const CASES: TCase[] = [
     expect: (w) => (w === "anonymous" ? 401 : office(w) ? 404 : 403),
   },
   { name: "page /account (API tokens)", path: () => "/account", scopes: ["own"], expect: page((w) => office(w)) },
+  { name: "GET /api/v1/openapi.json (public)", path: () => "/api/v1/openapi.json", scopes: ["own"], expect: () => 200 },
   { name: "GET /api/v1/openapi.json (public)", path: () => "/api/v1/openapi.json", scopes: ["own"], expect: () => 200 },
   { name: "GET /api/v1/vessels", path: () => "/api/v1/vessels", scopes: ["own"], expect: (w) => (w === "anonymous" ? 401 : 200) },
   {
@@ -220,6 +227,22 @@ const CASES: TCase[] = [
     name: "POST /api/v1/password-reset/confirm (forged token)", method: "POST", path: () => "/api/v1/password-reset/confirm",
     body: () => ({ token: "x".repeat(43), password: "a-long-enough-new-password", passwordAgain: "a-long-enough-new-password" }), scopes: ["own"], expect: () => 400,
   },
+  // Sharing with class: the office shares (the scenario's drafts cannot be shared: 409); a surveyor reads only what is shared.
+  { name: "GET /api/v1/inspections/:id/shares", path: (s, sc) => `${inspectionPath(s, sc)}/shares`, scopes: ["own", "sibling", "other"], expect: vesselReader },
+  {
+    name: "POST /api/v1/inspections/:id/shares (a draft)", method: "POST", path: (s, sc) => `${inspectionPath(s, sc)}/shares`,
+    body: (s) => ({ surveyorUserId: s.users.surveyor.id }), scopes: ["own", "sibling", "other"], expect: (w, sc) => officeOnly(w, sc, 409),
+  },
+  {
+    name: "DELETE /api/v1/inspections/:id/shares/:shareId (unknown share)", method: "DELETE", path: (s, sc) => `${inspectionPath(s, sc)}/shares/${crypto.randomUUID()}`,
+    scopes: ["own", "sibling", "other"], expect: (w, sc) => officeOnly(w, sc, 404),
+  },
+  { name: "GET /api/v1/shares", path: () => "/api/v1/shares", scopes: ["own"], expect: (w) => (w === "anonymous" ? 401 : w === "surveyor" ? 200 : 403) },
+  { name: "GET /api/v1/shares/:id/report (not shared)", path: () => `/api/v1/shares/${crypto.randomUUID()}/report`, scopes: ["own"], expect: (w) => (w === "anonymous" ? 401 : w === "surveyor" ? 404 : 403) },
+  {
+    name: "POST /api/v1/shares/:id/acknowledge (not shared)", method: "POST", path: () => `/api/v1/shares/${crypto.randomUUID()}/acknowledge`,
+    body: () => ({}), scopes: ["own"], expect: (w) => (w === "anonymous" ? 401 : w === "surveyor" ? 404 : 403),
+  },
   {
     name: "POST /api/v1/verify (open to anyone)", method: "POST", path: () => "/api/v1/verify",
     body: () => ({ fingerprint: "0".repeat(64) }), scopes: ["own"], expect: () => 200,
@@ -265,6 +288,11 @@ const CASES: TCase[] = [
   },
   { name: "POST /api/v1/dockings/:id/rebuild", method: "POST", path: (s, sc) => `${dockingPath(s, sc)}/rebuild`, scopes: ["own", "sibling", "other"], expect: dockingPlanner(200) },
   { name: "GET /api/v1/dockings/:id/work-list.csv", path: (s, sc) => `${dockingPath(s, sc)}/work-list.csv`, scopes: ["own", "sibling", "other"], expect: dockingPlanner(200) },
+  { name: "PUT /api/v1/dockings/:id/status (unknown status)", method: "PUT", path: (s, sc) => `${dockingPath(s, sc)}/status`, body: () => ({ status: "finished" }), scopes: ["own", "sibling", "other"], expect: dockingPlanner(400) },
+  {
+    name: "PUT /api/v1/dockings/:id/done (planned docking)", method: "PUT", path: (s, sc) => `${dockingPath(s, sc)}/done`,
+    body: () => ({ itemIds: [crypto.randomUUID()], done: true }), scopes: ["own", "sibling", "other"], expect: dockingPlanner(409),
+  },
   { name: "page /vessels/:id/dockings", path: (s, sc) => `/vessels/${vesselOf(s, sc).id}/dockings`, scopes: ["own", "sibling", "other"], expect: page((w, sc) => office(w) && sc !== "other") },
   { name: "page /vessels/:id/dockings/new", path: (s, sc) => `/vessels/${vesselOf(s, sc).id}/dockings/new`, scopes: ["own", "sibling", "other"], expect: page((w, sc) => office(w) && sc !== "other") },
   { name: "page /dockings/:id", path: (s, sc) => `/dockings/${dockingOf.get(vesselOf(s, sc).id)}`, scopes: ["own", "sibling", "other"], expect: page((w, sc) => office(w) && sc !== "other") },
