@@ -95,7 +95,6 @@ const CASES: TCase[] = [
   },
   { name: "page /account (API tokens)", path: () => "/account", scopes: ["own"], expect: page((w) => office(w)) },
   { name: "GET /api/v1/openapi.json (public)", path: () => "/api/v1/openapi.json", scopes: ["own"], expect: () => 200 },
-  { name: "GET /api/v1/openapi.json (public)", path: () => "/api/v1/openapi.json", scopes: ["own"], expect: () => 200 },
   { name: "GET /api/v1/vessels", path: () => "/api/v1/vessels", scopes: ["own"], expect: (w) => (w === "anonymous" ? 401 : 200) },
   {
     name: "POST /api/v1/vessels", method: "POST", path: () => "/api/v1/vessels", scopes: ["own"],
