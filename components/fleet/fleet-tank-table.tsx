@@ -3,7 +3,7 @@ import { Cell, Table } from "@/components/ui/table";
 import type { TFleetTank } from "@/lib/services/fleet";
 import { RatingMark } from "./rating-mark";
 
-const pct = (v: number) => `${Number.isInteger(v) ? v : v.toFixed(1)} %`;
+const pct = (v: number) => `${Number.isInteger(v) ? v : v.toFixed(1)}\u00a0%`;
 
 function DueCell({ tank }: { tank: TFleetTank }) {
   const due = tank.due;
