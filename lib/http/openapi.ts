@@ -5,12 +5,13 @@ import "server-only";
 // hand). tests/integration/openapi.test.ts fails when a route file is missing here.
 import { z } from "zod";
 import { ZApiTokenInput } from "@/lib/schemas/api-token";
-import { ZDockingInput, ZDockingItemDecisionInput } from "@/lib/schemas/docking";
+import { ZDockingDoneInput, ZDockingInput, ZDockingItemDecisionInput, ZDockingStatusInput } from "@/lib/schemas/docking";
 import { ZFleetQuery } from "@/lib/schemas/fleet";
 import { findingInputSchema, notInspectedInputSchema, sedimentInputSchema, ZAnodesInput, ZCoatingInput, ZEntryRecordInput, ZFindingsFlagInput, ZHeaderInput, ZInspectionStart, ZReadingInput, ZRemarksInput } from "@/lib/schemas/inspection";
 import { ZPasswordResetConfirm, ZPasswordResetRequest } from "@/lib/schemas/password-reset";
 import { photoCaptionSchema, ZDrawingUploadRequest, ZPhotoOrderInput, ZPhotoUploadRequest } from "@/lib/schemas/photo";
 import { ZRecipientInput } from "@/lib/schemas/recipient";
+import { ZAcknowledgeInput, ZShareInput } from "@/lib/schemas/share";
 import { ZReturnInput, ZSignInput, ZVerifyInput } from "@/lib/schemas/signing";
 import { memberInputSchema, specialFrameInputSchema, tankInputSchema } from "@/lib/schemas/tank";
 import { ZMembershipInput, ZUserInput } from "@/lib/schemas/user";
@@ -165,6 +166,13 @@ export const API_OPERATIONS: TApiOperation[] = [
     body: ZVerifyInput, rawBody: { contentTypes: [PDF, "multipart/form-data"], description: "The PDF itself, or a form with a \"file\" field." },
     response: ok("Vessel, tank, date and revision of the signed report, or that it is not one."),
   },
+  // ---- sharing with class
+  { method: "get", path: "/api/v1/inspections/{inspectionId}/shares", tag: "Sharing", summary: "Who a report is shared with and who acknowledged it", response: ok("The shares; for the office, also the surveyors to share with.") },
+  { method: "post", path: "/api/v1/inspections/{inspectionId}/shares", tag: "Sharing", summary: "Share a countersigned report with a surveyor (office)", body: ZShareInput, response: ok("The new share; the surveyor gets an e-mail notice.", 201) },
+  { method: "delete", path: "/api/v1/inspections/{inspectionId}/shares/{shareId}", tag: "Sharing", summary: "Withdraw a share (office)", response: ok("The share is withdrawn.") },
+  { method: "get", path: "/api/v1/shares", tag: "Sharing", summary: "The reports shared with you (surveyor)", response: ok("Exactly the reports shared with you.") },
+  { method: "get", path: "/api/v1/shares/{shareId}/report", tag: "Sharing", summary: "The shared report's signed PDF (surveyor)", response: ok("Redirect (302) to a short-lived storage URL.", 302) },
+  { method: "post", path: "/api/v1/shares/{shareId}/acknowledge", tag: "Sharing", summary: "Acknowledge a shared report, with an optional comment (surveyor)", body: ZAcknowledgeInput, response: ok("The acknowledgement; once.") },
   // ---- fleet
   { method: "get", path: "/api/v1/fleet", tag: "Fleet", summary: "The fleet overview: each tank's latest countersigned rating and due date, one page", query: ZFleetQuery, response: ok("Counts, and one page of tanks with rating, last inspection, next due date and overdue mark.") },
   // ---- dockings (office)
@@ -174,6 +182,8 @@ export const API_OPERATIONS: TApiOperation[] = [
   { method: "put", path: "/api/v1/dockings/{dockingId}/items", tag: "Dockings", summary: "Include, exclude or adjust work-list items, with a reason", body: ZDockingDecisions, response: ok("The docking as saved.") },
   { method: "post", path: "/api/v1/dockings/{dockingId}/rebuild", tag: "Dockings", summary: "Gather the work list again from the latest countersigned reports", response: ok("The docking; decisions stay with their items.") },
   { method: "get", path: "/api/v1/dockings/{dockingId}/work-list.csv", tag: "Dockings", summary: "The priced work list as CSV", response: ok("Header, one row per item, totals per kind and the grand total.", 200, "text/csv") },
+  { method: "put", path: "/api/v1/dockings/{dockingId}/status", tag: "Dockings", summary: "Start, complete or cancel a docking; completed and cancelled are final", body: ZDockingStatusInput, response: ok("The docking with its new status.") },
+  { method: "put", path: "/api/v1/dockings/{dockingId}/done", tag: "Dockings", summary: "Mark items done while the docking is in progress; a finding closes when all its items are done", body: ZDockingDoneInput, response: ok("The closed and reopened findings, and the docking.") },
   { method: "get", path: "/api/v1/openapi.json", tag: "API", auth: "public", summary: "This document", response: ok("The OpenAPI 3.1 document.") },
 ];
 
