@@ -19,6 +19,7 @@ export type TWorkListItemView = {
   quantityPriced: number;
   unitRate: number;
   cost: number;
+  done: boolean;
 };
 export type TWorkListView = {
   currency: string;
@@ -33,7 +34,7 @@ type TDraft = { included: boolean; adjustedQuantity: string; adjustmentReason: s
 const quantityText = (q: number) => new Intl.NumberFormat("en", { maximumFractionDigits: 3 }).format(q);
 
 /** The priced work list; the office includes, excludes or adjusts items with a reason. Costs come from the server. */
-export function WorkListEditor({ dockingId, locked, initial }: { dockingId: string; locked: boolean; initial: TWorkListView }) {
+export function WorkListEditor({ dockingId, locked, inProgress, initial }: { dockingId: string; locked: boolean; inProgress: boolean; initial: TWorkListView }) {
   const [list, setList] = useState(initial);
   const [editing, setEditing] = useState<string | null>(null);
   const [draft, setDraft] = useState<TDraft>({ included: true, adjustedQuantity: "", adjustmentReason: "" });
@@ -46,12 +47,12 @@ export function WorkListEditor({ dockingId, locked, initial }: { dockingId: stri
     setMessage(null);
     try {
       const res = await fetch(url, init);
-      const body = (await res.json().catch(() => ({}))) as TErrorBody & { workList?: TWorkListView };
+      const body = (await res.json().catch(() => ({}))) as TErrorBody & { workList?: Omit<TWorkListView, "items"> & { items: (Omit<TWorkListItemView, "done"> & { doneAt: string | null })[] } };
       if (!res.ok || !body.workList) {
         const issue = body.error?.issues?.[0];
         return setMessage({ tone: "error", text: `${body.error?.message ?? "Nothing was changed."}${issue && !body.error?.message?.includes(issue.message) ? ` (${issue.message})` : ""}` });
       }
-      setList(body.workList);
+      setList({ ...body.workList, items: body.workList.items.map(({ doneAt, ...i }) => ({ ...i, done: doneAt !== null })) });
       setEditing(null);
       setMessage({ tone: "success", text: done });
     } catch {
@@ -70,6 +71,10 @@ export function WorkListEditor({ dockingId, locked, initial }: { dockingId: stri
     const adjusted = draft.adjustedQuantity.trim();
     const decision = { id: item.id, included: draft.included, adjustedQuantity: adjusted === "" ? null : adjusted, adjustmentReason: draft.adjustmentReason };
     return send(`/api/v1/dockings/${dockingId}/items`, { method: "PUT", headers: { "content-type": "application/json" }, body: JSON.stringify({ items: [decision] }) }, "Saved; the totals are priced again.");
+  }
+
+  function markDone(item: TWorkListItemView, done: boolean) {
+    return send(`/api/v1/dockings/${dockingId}/done`, { method: "PUT", headers: { "content-type": "application/json" }, body: JSON.stringify({ itemIds: [item.id], done }) }, done ? "Marked done; a finding closes when all its items are done." : "Marked not done.");
   }
 
   return (
@@ -117,7 +122,15 @@ export function WorkListEditor({ dockingId, locked, initial }: { dockingId: stri
               </Cell>
               <Cell className="whitespace-nowrap text-right">{money(i.unitRate)}</Cell>
               <Cell className="whitespace-nowrap text-right">{money(i.cost)}</Cell>
-              <Cell>{locked || editing === i.id ? null : <Button variant="secondary" onClick={() => edit(i)} aria-label={`Change ${i.description}`}>Change</Button>}</Cell>
+              <Cell>
+                {inProgress && i.included ? (
+                  <Button variant={i.done ? "secondary" : "primary"} disabled={busy} onClick={() => markDone(i, !i.done)} aria-label={`${i.done ? "Not done" : "Mark done"}: ${i.description}`}>
+                    {i.done ? "Not done" : "Mark done"}
+                  </Button>
+                ) : null}
+                {i.done ? <span className="block text-sm font-semibold text-green-800 no-underline">Done</span> : null}
+                {locked || editing === i.id ? null : <Button variant="secondary" onClick={() => edit(i)} aria-label={`Change ${i.description}`}>Change</Button>}
+              </Cell>
             </tr>
           ))}
         </Table>

@@ -5,6 +5,7 @@ import { anodeRecords, dockingItems, dockings, findings, inspections, sedimentZo
 import type { TWriter } from "@/db/seed/builders";
 import type { TWorkItem, TWorkSource } from "@/lib/office/work-list";
 import type { TDockingInput } from "@/lib/schemas/docking";
+import type { TDockingStatus } from "@/lib/vocabulary";
 import { writeAudit } from "./audit";
 
 type TOrgScope = { orgId: string };
@@ -200,5 +201,69 @@ export async function decideItems(v: TDockingScope & { actorUserId: string; deci
     }
     if (changed) await tx.update(dockings).set({ updatedAt: new Date() }).where(and(eq(dockings.orgId, v.orgId), eq(dockings.id, v.dockingId)));
     return { changed } as const;
+  });
+}
+
+/** The status changes a docking may make: planned → in progress → completed, or cancelled before completion. */
+export const DOCKING_TRANSITIONS: Record<TDockingStatus, readonly TDockingStatus[]> = {
+  planned: ["in_progress", "completed", "cancelled"],
+  in_progress: ["completed", "cancelled"],
+  completed: [],
+  cancelled: [],
+};
+
+/** Moves the docking to `to` when the transition is allowed; returns the refused status otherwise, null for no such docking. */
+export async function setDockingStatus(v: TDockingScope & { actorUserId: string; to: TDockingStatus }) {
+  return db().transaction(async (tx) => {
+    const docking = await lockDocking(tx, v);
+    if (!docking) return null;
+    if (!DOCKING_TRANSITIONS[docking.status].includes(v.to)) return { refused: docking.status } as const;
+    await tx.update(dockings).set({ status: v.to, updatedAt: new Date() }).where(and(eq(dockings.orgId, v.orgId), eq(dockings.id, v.dockingId)));
+    await writeAudit(tx, { orgId: v.orgId, actorUserId: v.actorUserId, action: "docking.status", entity: "docking", entityId: v.dockingId, detail: { from: docking.status, to: v.to } });
+    return { from: docking.status, to: v.to } as const;
+  });
+}
+
+/**
+ * Marks included items done (or not done) while the docking is in progress.
+ * A finding is closed when every included item gathered from it in this
+ * docking is done, and opened again when one of them is marked not done.
+ * Returns "refused" with the docking's status when it is not in progress,
+ * "unknown" with ids that are not included items of this docking.
+ */
+export async function markItemsDone(v: TDockingScope & { actorUserId: string; itemIds: readonly string[]; done: boolean }) {
+  return db().transaction(async (tx) => {
+    const docking = await lockDocking(tx, v);
+    if (!docking) return null;
+    if (docking.status !== "in_progress") return { refused: docking.status } as const;
+    const all = await tx.select().from(dockingItems).where(and(eq(dockingItems.orgId, v.orgId), eq(dockingItems.dockingId, v.dockingId)));
+    const byId = new Map(all.filter((i) => i.included).map((i) => [i.id, i]));
+    const unknown = v.itemIds.filter((id) => !byId.has(id));
+    if (unknown.length) return { unknown } as const;
+    const at = v.done ? new Date() : null;
+    const touched = new Set<string>();
+    for (const id of v.itemIds) {
+      const item = byId.get(id)!;
+      if ((item.doneAt !== null) === v.done) continue;
+      await tx.update(dockingItems).set({ doneAt: at }).where(and(eq(dockingItems.orgId, v.orgId), eq(dockingItems.id, id)));
+      item.doneAt = at;
+      await writeAudit(tx, { orgId: v.orgId, actorUserId: v.actorUserId, action: v.done ? "docking_item.done" : "docking_item.undone", entity: "docking_item", entityId: id, detail: { dockingId: v.dockingId } });
+      if (item.findingId) touched.add(item.findingId);
+    }
+    const closed: string[] = [];
+    const reopened: string[] = [];
+    for (const findingId of touched) {
+      const items = all.filter((i) => i.included && i.findingId === findingId);
+      const allDone = items.every((i) => i.doneAt !== null);
+      const [row] = await tx
+        .update(findings)
+        .set(allDone ? { status: "closed", closedAt: at ?? new Date() } : { status: "open", closedAt: null })
+        .where(and(eq(findings.orgId, v.orgId), eq(findings.id, findingId), eq(findings.status, allDone ? "open" : "closed")))
+        .returning({ id: findings.id });
+      if (!row) continue;
+      (allDone ? closed : reopened).push(findingId);
+      await writeAudit(tx, { orgId: v.orgId, actorUserId: v.actorUserId, action: allDone ? "finding.close" : "finding.reopen", entity: "finding", entityId: findingId, detail: { dockingId: v.dockingId } });
+    }
+    return { closed, reopened } as const;
   });
 }

@@ -1,4 +1,5 @@
 import { z } from "zod";
+import { DOCKING_STATUSES } from "@/lib/vocabulary";
 import { numberFromForm, optionalText } from "./common";
 
 // A docking (yard, place, planned date, currency, unit rates) and the
@@ -61,3 +62,12 @@ export const ZDockingItemDecisionInput = z
     if (adjusted && d.adjustmentReason && d.adjustmentReason.length < 3) ctx.addIssue({ code: "custom", path: ["adjustmentReason"], message: "say why the quantity was changed, in a few words" });
   });
 export type TDockingItemDecisionInput = z.infer<typeof ZDockingItemDecisionInput>;
+
+/** Start, complete or cancel a docking. */
+export const ZDockingStatusInput = z.object({ status: z.enum(DOCKING_STATUSES, { error: `must be one of ${DOCKING_STATUSES.join(", ")}` }) });
+
+/** Mark included items done (or not done) while the docking is in progress. */
+export const ZDockingDoneInput = z.object({
+  itemIds: z.array(z.string({ error: "must be item ids" })).min(1, "name at least one item").max(1000, "at most 1000 items at once"),
+  done: z.boolean({ error: "say whether the items are done" }),
+});

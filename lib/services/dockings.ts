@@ -11,8 +11,8 @@ import { AppError } from "@/lib/errors";
 import { validateInput } from "@/lib/http/route";
 import { workListCsv } from "@/lib/office/work-list-csv";
 import { gatherWorkItems, priceWorkList, WORK_KINDS, type TWorkKind, type TWorkSource } from "@/lib/office/work-list";
-import { ZDockingInput, ZDockingItemDecisionInput } from "@/lib/schemas/docking";
-import type { TRole } from "@/lib/vocabulary";
+import { ZDockingDoneInput, ZDockingInput, ZDockingItemDecisionInput, ZDockingStatusInput } from "@/lib/schemas/docking";
+import { DOCKING_STATUS_LABELS, type TRole } from "@/lib/vocabulary";
 
 /** Who plans dockings and reads their work lists: the office. */
 export const DOCKING_PLANNERS = ["superintendent", "admin"] as const;
@@ -106,4 +106,31 @@ export async function workListCsvAs(actor: TActor, dockingId: string) {
   const csv = workListCsv(workList, { vesselName: vessel.name, yard: docking.yard, place: docking.place, plannedOn: docking.plannedOn });
   const fileName = `work-list-${vessel.name}-${docking.plannedOn}.csv`.replace(/[^A-Za-z0-9._-]+/g, "-");
   return { csv, fileName };
+}
+
+
+/** Starts, completes or cancels the docking; a completed or cancelled docking is final. */
+export async function setDockingStatusAs(actor: TActor, dockingId: string, body: unknown) {
+  const { orgId } = await authorizeDocking(actor, dockingId);
+  const { status } = validateInput(ZDockingStatusInput, body);
+  const result = await q.setDockingStatus({ orgId, dockingId, actorUserId: actor.userId, to: status });
+  if (!result) throw new AppError("not_found", "No such docking.");
+  if (result.refused) {
+    throw new AppError("conflict", `A docking that is ${DOCKING_STATUS_LABELS[result.refused].toLowerCase()} cannot become ${DOCKING_STATUS_LABELS[status].toLowerCase()}.`, [{ path: "status", message: `cannot change from ${result.refused} to ${status}` }]);
+  }
+  return getDockingAs(actor, dockingId);
+}
+
+
+/** While the docking is in progress: marks included items done (closing a finding once all its items are done) or not done. */
+export async function markDockingItemsDoneAs(actor: TActor, dockingId: string, body: unknown) {
+  const { orgId } = await authorizeDocking(actor, dockingId);
+  const input = validateInput(ZDockingDoneInput, body);
+  const result = await q.markItemsDone({ orgId, dockingId, actorUserId: actor.userId, itemIds: input.itemIds, done: input.done });
+  if (!result) throw new AppError("not_found", "No such docking.");
+  if (result.refused) {
+    throw new AppError("conflict", `Items are marked done while the docking is in progress; this one is ${DOCKING_STATUS_LABELS[result.refused].toLowerCase()}.`, [{ path: "status", message: `the docking is ${result.refused}` }]);
+  }
+  if (result.unknown) throw new AppError("not_found", "No such included item in this docking; nothing was changed.", result.unknown.map((id) => ({ path: "itemIds", message: `${id} is not an included item of this docking` })));
+  return { closedFindings: result.closed ?? [], reopenedFindings: result.reopened ?? [], ...(await getDockingAs(actor, dockingId)) };
 }

@@ -2,10 +2,10 @@
 // from a countersigned report with its totals, adjusts an item with a reason,
 // and downloads the CSV.
 import path from "node:path";
-import { eq } from "drizzle-orm";
+import { and, eq } from "drizzle-orm";
 import type { Browser } from "playwright-core";
 import { afterAll, beforeAll, describe, expect, it } from "vitest";
-import { inspections } from "@/db/schema";
+import { findings, inspections } from "@/db/schema";
 import { fillInspection } from "@/db/seed/complete-inspection";
 import { launchBrowser } from "../fixtures/browser";
 import { testEnv } from "../fixtures/env";
@@ -61,6 +61,12 @@ describe("the docking work list in Chromium", () => {
     expect(lines).toContain("No. 1 WBT P,Sediment removal,\"Sediment removal, 1 zone\",yes,1,3,3,m³,95,USD,285.00,Yard survey found more mud");
     expect(lines).toContain("Total,Coating repair,\"2 included, 0 excluded\",,,,3.7,m²,,USD,131.35,");
     expect(lines.at(-2)).toMatch(/^Grand total,,".*",,,,,,,USD,596\.35,$/);
+
+    // After the docking: the yard's work is ticked off item by item; finding 1 closes with its only item.
+    await workList.startDocking();
+    await workList.markDone(/Finding 1: /);
+    const [finding] = await testDb().select({ status: findings.status }).from(findings).where(and(eq(findings.inspectionId, s.inspectionOf(s.ownVessel.id)), eq(findings.number, 1)));
+    expect(finding!.status).toBe("closed");
     await page.close();
   }, 120_000);
 });

@@ -238,3 +238,65 @@ describe("bad input and strangers", () => {
     expect(put.status).toBe(404);
   });
 });
+
+describe("after the docking: items done close their findings", () => {
+  let second = "";
+  const view = async () => body(await superintendent.request(`/api/v1/dockings/${second}`));
+  const status = (to: unknown) => superintendent.request(`/api/v1/dockings/${second}/status`, { method: "PUT", json: { status: to } });
+  const done = (itemIds: string[], isDone = true) => superintendent.request(`/api/v1/dockings/${second}/done`, { method: "PUT", json: { itemIds, done: isDone } });
+  const findingStatus = async (number: number) =>
+    (await testDb().select({ status: findings.status, n: findings.number }).from(findings).where(eq(findings.inspectionId, s.inspectionOf(s.ownVessel.id)))).find((f) => f.n === number)!.status;
+
+  beforeAll(async () => {
+    const res = await superintendent.request(`/api/v1/vessels/${s.ownVessel.id}/dockings`, { method: "POST", json: { ...DOCKING, plannedOn: "2027-09-01" } });
+    second = ((await res.json()) as { docking: { id: string } }).docking.id;
+  });
+
+  it("refuses marking done before the docking is in progress, and an unknown status", async () => {
+    const [item] = (await view()).workList.items;
+    expect((await done([item!.id])).status).toBe(409);
+    const bad = await status("finished");
+    expect(bad.status).toBe(400);
+    expect(((await bad.json()) as { error: { issues: { path: string }[] } }).error.issues.map((i) => i.path)).toEqual(["status"]);
+    expect((await status("in_progress")).status).toBe(200);
+    expect((await status("planned")).status).toBe(409);
+  });
+
+  it("closes a finding once all its items are done, and opens it again when one is undone", async () => {
+    const items = (await view()).workList.items;
+    const f3 = items.filter((i) => i.description.startsWith("Finding 3:"));
+    expect(f3.map((i) => i.kind).sort()).toEqual(["coating", "steel"]);
+    const steel = f3.find((i) => i.kind === "steel")!;
+    const coating = f3.find((i) => i.kind === "coating")!;
+    expect((await done([steel.id])).status).toBe(200);
+    expect(await findingStatus(3)).toBe("open");
+    const res = await done([coating.id]);
+    expect(res.status).toBe(200);
+    expect(((await res.json()) as { closedFindings: string[] }).closedFindings).toHaveLength(1);
+    expect(await findingStatus(3)).toBe("closed");
+    expect(await testDb().$count(auditLog, and(eq(auditLog.orgId, s.org.id), eq(auditLog.action, "finding.close")))).toBe(1);
+    expect((await done([coating.id], false)).status).toBe(200);
+    expect(await findingStatus(3)).toBe("open");
+    expect((await done([coating.id])).status).toBe(200);
+    expect(await findingStatus(3)).toBe("closed");
+  });
+
+  it("refuses an item of another docking, and anything once the docking is completed", async () => {
+    const [foreign] = await testDb().select().from(dockingItems).where(eq(dockingItems.dockingId, dockingId));
+    expect((await done([foreign!.id])).status).toBe(404);
+    expect((await status("completed")).status).toBe(200);
+    const anodes = (await view()).workList.items.find((i) => i.kind === "anodes")!;
+    expect((await done([anodes.id])).status).toBe(409);
+    expect((await status("cancelled")).status).toBe(409);
+    expect((await officer.request(`/api/v1/dockings/${second}/status`, { method: "PUT", json: { status: "cancelled" } })).status).toBe(403);
+    expect((await otherAdmin.request(`/api/v1/dockings/${second}/done`, { method: "PUT", json: { itemIds: [anodes.id], done: true } })).status).toBe(404);
+  });
+
+  it("leaves closed findings out of a docking gathered afterwards", async () => {
+    const res = await superintendent.request(`/api/v1/vessels/${s.ownVessel.id}/dockings`, { method: "POST", json: { ...DOCKING, plannedOn: "2028-03-01" } });
+    const third = ((await res.json()) as { docking: { id: string } }).docking.id;
+    const b = await body(await superintendent.request(`/api/v1/dockings/${third}`));
+    expect(b.workList.items.some((i) => i.description.startsWith("Finding 3:"))).toBe(false);
+    expect(b.workList.totals.steel!.cost).toBe(0);
+  });
+});

@@ -30,6 +30,17 @@ export class WorkListPage {
     await this.page.getByText("Saved; the totals are priced again.").waitFor();
   }
 
+  async startDocking() {
+    await this.page.getByRole("button", { name: "Start the docking" }).click();
+    await this.page.getByRole("button", { name: "Complete the docking" }).waitFor();
+  }
+
+  async markDone(description: RegExp) {
+    const row = this.page.getByTestId("work-item").filter({ hasText: description });
+    await row.getByRole("button", { name: /^Mark done/ }).click();
+    await this.page.getByText("Marked done; a finding closes when all its items are done.").waitFor();
+  }
+
   /** Clicks "Export CSV" and returns the downloaded file's name and text. */
   async exportCsv() {
     const [download] = await Promise.all([this.page.waitForEvent("download"), this.page.getByRole("link", { name: "Export CSV" }).click()]);

@@ -1,5 +1,6 @@
 import type { Metadata } from "next";
 import Link from "next/link";
+import { DockingStatusActions } from "@/components/dockings/docking-status-actions";
 import { WorkListEditor } from "@/components/dockings/work-list-editor";
 import { Notice } from "@/components/ui/notice";
 import { PageHeader } from "@/components/ui/page-header";
@@ -29,9 +30,12 @@ export default async function WorkListPage({ params }: { params: Promise<{ docki
         <p className="text-sm text-slate-700">
           Gathered from {sources.length ? sources.map((s) => `${s.tankCode} (${s.inspectedOn})`).join(", ") : "no countersigned report yet"}. Rates: steel {docking.steelRatePerKg}/kg, coating {docking.coatingRatePerM2}/m², anodes {docking.anodeRatePerPiece}/piece, sediment {docking.sedimentRatePerM3}/m³.
         </p>
+        <DockingStatusActions dockingId={docking.id} status={docking.status} />
         <WorkListEditor
+          key={docking.status}
           dockingId={docking.id}
           locked={locked}
+          inProgress={docking.status === "in_progress"}
           initial={{
             currency: workList.currency,
             minorUnits: workList.minorUnits,
@@ -39,7 +43,7 @@ export default async function WorkListPage({ params }: { params: Promise<{ docki
             totals: workList.totals,
             items: workList.items.map((i) => ({
               id: i.id, tankCode: i.tankCode, kind: i.kind, description: i.description, unit: i.unit, quantity: i.quantity, adjustedQuantity: i.adjustedQuantity,
-              adjustmentReason: i.adjustmentReason, included: i.included, quantityPriced: i.quantityPriced, unitRate: i.unitRate, cost: i.cost,
+              adjustmentReason: i.adjustmentReason, included: i.included, quantityPriced: i.quantityPriced, unitRate: i.unitRate, cost: i.cost, done: i.doneAt !== null,
             })),
           }}
         />
