@@ -11,6 +11,7 @@ import { findingInputSchema, notInspectedInputSchema, sedimentInputSchema, ZAnod
 import { ZPasswordResetConfirm, ZPasswordResetRequest } from "@/lib/schemas/password-reset";
 import { photoCaptionSchema, ZDrawingUploadRequest, ZPhotoOrderInput, ZPhotoUploadRequest } from "@/lib/schemas/photo";
 import { ZRecipientInput } from "@/lib/schemas/recipient";
+import { ZAcknowledgeInput, ZShareInput } from "@/lib/schemas/share";
 import { ZReturnInput, ZSignInput, ZVerifyInput } from "@/lib/schemas/signing";
 import { memberInputSchema, specialFrameInputSchema, tankInputSchema } from "@/lib/schemas/tank";
 import { ZMembershipInput, ZUserInput } from "@/lib/schemas/user";
@@ -165,6 +166,13 @@ export const API_OPERATIONS: TApiOperation[] = [
     body: ZVerifyInput, rawBody: { contentTypes: [PDF, "multipart/form-data"], description: "The PDF itself, or a form with a \"file\" field." },
     response: ok("Vessel, tank, date and revision of the signed report, or that it is not one."),
   },
+  // ---- sharing with class
+  { method: "get", path: "/api/v1/inspections/{inspectionId}/shares", tag: "Sharing", summary: "Who a report is shared with and who acknowledged it", response: ok("The shares; for the office, also the surveyors to share with.") },
+  { method: "post", path: "/api/v1/inspections/{inspectionId}/shares", tag: "Sharing", summary: "Share a countersigned report with a surveyor (office)", body: ZShareInput, response: ok("The new share; the surveyor gets an e-mail notice.", 201) },
+  { method: "delete", path: "/api/v1/inspections/{inspectionId}/shares/{shareId}", tag: "Sharing", summary: "Withdraw a share (office)", response: ok("The share is withdrawn.") },
+  { method: "get", path: "/api/v1/shares", tag: "Sharing", summary: "The reports shared with you (surveyor)", response: ok("Exactly the reports shared with you.") },
+  { method: "get", path: "/api/v1/shares/{shareId}/report", tag: "Sharing", summary: "The shared report's signed PDF (surveyor)", response: ok("Redirect (302) to a short-lived storage URL.", 302) },
+  { method: "post", path: "/api/v1/shares/{shareId}/acknowledge", tag: "Sharing", summary: "Acknowledge a shared report, with an optional comment (surveyor)", body: ZAcknowledgeInput, response: ok("The acknowledgement; once.") },
   // ---- fleet
   { method: "get", path: "/api/v1/fleet", tag: "Fleet", summary: "The fleet overview: each tank's latest countersigned rating and due date, one page", query: ZFleetQuery, response: ok("Counts, and one page of tanks with rating, last inspection, next due date and overdue mark.") },
   // ---- dockings (office)
