@@ -242,6 +242,11 @@ const CASES: TCase[] = [
     name: "POST /api/v1/shares/:id/acknowledge (not shared)", method: "POST", path: () => `/api/v1/shares/${crypto.randomUUID()}/acknowledge`,
     body: () => ({}), scopes: ["own"], expect: (w) => (w === "anonymous" ? 401 : w === "surveyor" ? 404 : 403),
   },
+  { name: "GET /api/v1/inspections/:id/comments", path: (s, sc) => `${inspectionPath(s, sc)}/comments`, scopes: ["own", "sibling", "other"], expect: vesselReader },
+  {
+    name: "POST /api/v1/inspections/:id/comments", method: "POST", path: (s, sc) => `${inspectionPath(s, sc)}/comments`,
+    body: () => ({ body: "Matrix: a comment from the office." }), scopes: ["own", "sibling", "other"], expect: (w, sc) => officeOnly(w, sc, 201),
+  },
   {
     name: "POST /api/v1/verify (open to anyone)", method: "POST", path: () => "/api/v1/verify",
     body: () => ({ fingerprint: "0".repeat(64) }), scopes: ["own"], expect: () => 200,

@@ -1,8 +1,11 @@
 import type { Metadata } from "next";
 import { InspectionWizard } from "@/components/inspection-wizard/wizard";
+import { CommentsPanel } from "@/components/signing/comments-panel";
 import { SigningPanel } from "@/components/signing/signing-panel";
 import { pageActor, pageAuthorize } from "@/lib/auth/page";
 import { STEPS, type TStep } from "@/lib/inspection/blockers";
+import { formatFrames } from "@/lib/structure/frames";
+import { FINDING_TYPE_LABELS } from "@/lib/vocabulary";
 import { canInspect, readInspectionView } from "@/lib/services/inspections";
 import { readSigningStateAs } from "@/lib/services/signing";
 
@@ -20,6 +23,7 @@ export default async function InspectionPage({ params, searchParams }: { params:
         inspectionId={inspectionId} status={view.inspection.status} revision={view.inspection.revision}
         state={JSON.parse(JSON.stringify(signing))} actor={{ userId: actor.userId, name: actor.name }}
       />
+      <CommentsPanel inspectionId={inspectionId} findings={view.findings.map((f) => ({ id: f.id, number: f.number, label: `${FINDING_TYPE_LABELS[f.type]}, ${formatFrames(f.frameFrom, f.frameTo)}` }))} />
       <InspectionWizard key={`${view.inspection.status}-${view.inspection.revision}`} initial={JSON.parse(JSON.stringify(view))} step={first} signerName={canInspect(signing.roles) ? actor.name : undefined} />
     </div>
   );
