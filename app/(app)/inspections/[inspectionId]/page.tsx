@@ -23,8 +23,8 @@ export default async function InspectionPage({ params, searchParams }: { params:
         inspectionId={inspectionId} status={view.inspection.status} revision={view.inspection.revision}
         state={JSON.parse(JSON.stringify(signing))} actor={{ userId: actor.userId, name: actor.name }}
       />
-      <CommentsPanel inspectionId={inspectionId} findings={view.findings.map((f) => ({ id: f.id, number: f.number, label: `${FINDING_TYPE_LABELS[f.type]}, ${formatFrames(f.frameFrom, f.frameTo)}` }))} />
       <InspectionWizard key={`${view.inspection.status}-${view.inspection.revision}`} initial={JSON.parse(JSON.stringify(view))} step={first} signerName={canInspect(signing.roles) ? actor.name : undefined} />
+      <CommentsPanel inspectionId={inspectionId} findings={view.findings.map((f) => ({ id: f.id, number: f.number, label: `${FINDING_TYPE_LABELS[f.type]}, ${formatFrames(f.frameFrom, f.frameTo)}` }))} />
     </div>
   );
 }
