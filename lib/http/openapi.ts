@@ -5,6 +5,7 @@ import "server-only";
 // hand). tests/integration/openapi.test.ts fails when a route file is missing here.
 import { z } from "zod";
 import { ZApiTokenInput } from "@/lib/schemas/api-token";
+import { ZCommentInput } from "@/lib/schemas/comment";
 import { ZDockingDoneInput, ZDockingInput, ZDockingItemDecisionInput, ZDockingStatusInput } from "@/lib/schemas/docking";
 import { ZFleetQuery } from "@/lib/schemas/fleet";
 import { findingInputSchema, notInspectedInputSchema, sedimentInputSchema, ZAnodesInput, ZCoatingInput, ZEntryRecordInput, ZFindingsFlagInput, ZHeaderInput, ZInspectionStart, ZReadingInput, ZRemarksInput } from "@/lib/schemas/inspection";
@@ -166,6 +167,9 @@ export const API_OPERATIONS: TApiOperation[] = [
     body: ZVerifyInput, rawBody: { contentTypes: [PDF, "multipart/form-data"], description: "The PDF itself, or a form with a \"file\" field." },
     response: ok("Vessel, tank, date and revision of the signed report, or that it is not one."),
   },
+  // ---- comments from the office
+  { method: "get", path: "/api/v1/inspections/{inspectionId}/comments", tag: "Reports", summary: "Comments on the report and its findings", response: ok("The comments, oldest first, and whether you may add one.") },
+  { method: "post", path: "/api/v1/inspections/{inspectionId}/comments", tag: "Reports", summary: "Comment on the report or one finding (office); the ship is told by e-mail", body: ZCommentInput, response: ok("The new comment.", 201) },
   // ---- sharing with class
   { method: "get", path: "/api/v1/inspections/{inspectionId}/shares", tag: "Sharing", summary: "Who a report is shared with and who acknowledged it", response: ok("The shares; for the office, also the surveyors to share with.") },
   { method: "post", path: "/api/v1/inspections/{inspectionId}/shares", tag: "Sharing", summary: "Share a countersigned report with a surveyor (office)", body: ZShareInput, response: ok("The new share; the surveyor gets an e-mail notice.", 201) },
@@ -184,6 +188,7 @@ export const API_OPERATIONS: TApiOperation[] = [
   { method: "get", path: "/api/v1/dockings/{dockingId}/work-list.csv", tag: "Dockings", summary: "The priced work list as CSV", response: ok("Header, one row per item, totals per kind and the grand total.", 200, "text/csv") },
   { method: "put", path: "/api/v1/dockings/{dockingId}/status", tag: "Dockings", summary: "Start, complete or cancel a docking; completed and cancelled are final", body: ZDockingStatusInput, response: ok("The docking with its new status.") },
   { method: "put", path: "/api/v1/dockings/{dockingId}/done", tag: "Dockings", summary: "Mark items done while the docking is in progress; a finding closes when all its items are done", body: ZDockingDoneInput, response: ok("The closed and reopened findings, and the docking.") },
+  { method: "get", path: "/api/v1/dockings/{dockingId}/work-list.pdf", tag: "Dockings", summary: "The priced work list as PDF", response: ok("Items, totals per kind and the grand total.", 200, "application/pdf") },
   { method: "get", path: "/api/v1/openapi.json", tag: "API", auth: "public", summary: "This document", response: ok("The OpenAPI 3.1 document.") },
 ];
 
