@@ -82,6 +82,7 @@ export function WorkListEditor({ dockingId, locked, inProgress, initial }: { doc
       {message ? <Notice tone={message.tone}>{message.text}</Notice> : null}
       <div className="flex flex-wrap gap-2">
         <a href={`/api/v1/dockings/${dockingId}/work-list.csv`} download className="rounded-md border border-slate-300 bg-white px-3 py-2 text-sm font-semibold text-slate-800 hover:bg-slate-50">Export CSV</a>
+        <a href={`/api/v1/dockings/${dockingId}/work-list.pdf`} download className="rounded-md border border-slate-300 bg-white px-3 py-2 text-sm font-semibold text-slate-800 hover:bg-slate-50">Export PDF</a>
         {locked ? null : (
           <Button variant="secondary" disabled={busy} onClick={() => send(`/api/v1/dockings/${dockingId}/rebuild`, { method: "POST" }, "Gathered again from the latest countersigned reports; decisions were kept.")}>
             Gather again

@@ -297,6 +297,7 @@ const CASES: TCase[] = [
     name: "PUT /api/v1/dockings/:id/done (planned docking)", method: "PUT", path: (s, sc) => `${dockingPath(s, sc)}/done`,
     body: () => ({ itemIds: [crypto.randomUUID()], done: true }), scopes: ["own", "sibling", "other"], expect: dockingPlanner(409),
   },
+  { name: "GET /api/v1/dockings/:id/work-list.pdf", path: (s, sc) => `${dockingPath(s, sc)}/work-list.pdf`, scopes: ["own", "sibling", "other"], expect: dockingPlanner(200) },
   { name: "page /vessels/:id/dockings", path: (s, sc) => `/vessels/${vesselOf(s, sc).id}/dockings`, scopes: ["own", "sibling", "other"], expect: page((w, sc) => office(w) && sc !== "other") },
   { name: "page /vessels/:id/dockings/new", path: (s, sc) => `/vessels/${vesselOf(s, sc).id}/dockings/new`, scopes: ["own", "sibling", "other"], expect: page((w, sc) => office(w) && sc !== "other") },
   { name: "page /dockings/:id", path: (s, sc) => `/dockings/${dockingOf.get(vesselOf(s, sc).id)}`, scopes: ["own", "sibling", "other"], expect: page((w, sc) => office(w) && sc !== "other") },

@@ -8,6 +8,7 @@ import { auditLog, dockingItems, dockings, findings, inspections } from "@/db/sc
 import { fillInspection } from "@/db/seed/complete-inspection";
 import { repairQuantities } from "@/lib/inspection/quantities";
 import { signIn, type TClient } from "../fixtures/http";
+import { pdfText } from "../fixtures/pdf";
 import { buildScenario, PASSWORD, testDb, type TScenario } from "../fixtures/scenario";
 
 let s: TScenario;
@@ -181,6 +182,20 @@ describe("deciding on items", () => {
       `Grand total,,"${s.ownVessel.name}, Test Yard Shipbuilding, Test Harbour, Berth 3, planned 2027-04-12",,,,,,,USD,1101.55,`,
     ]);
   });
+
+  it("exports the PDF with the items, the totals per kind and the grand total", async () => {
+    const res = await superintendent.request(`/api/v1/dockings/${dockingId}/work-list.pdf`);
+    expect(res.status).toBe(200);
+    expect(res.headers.get("content-type")).toBe("application/pdf");
+    const text = await pdfText(new Uint8Array(await res.arrayBuffer()));
+    expect(text).toContain(`Docking work list: ${s.ownVessel.name}`);
+    expect(text).toContain("Finding 3: Pitting, Fr. 90–91, Bottom shell plating: steel renewal (insert plate)");
+    expect(text).toContain("Reason: Touched up by the crew at sea");
+    expect(text).toMatch(/Coating repair: 2 included, 1 excluded 4 m² 142\.00 USD/);
+    expect(text).toMatch(/Grand total 1101\.55 USD/);
+    expect((await officer.request(`/api/v1/dockings/${dockingId}/work-list.pdf`)).status).toBe(403);
+    expect((await otherAdmin.request(`/api/v1/dockings/${dockingId}/work-list.pdf`)).status).toBe(404);
+  }, 60_000);
 
   it("refuses any change once the docking is completed", async () => {
     await testDb().update(dockings).set({ status: "completed" }).where(eq(dockings.id, dockingId));
