@@ -53,9 +53,7 @@ function datedTanks(scope: TFleetScope): SQL {
       select t.id as tank_id, t.vessel_id, t.code, t.name as tank_name, t.kind, t.side, t.coating_system, t.sort_order,
              v.name as vessel_name, v.vessel_type,
              li.id as inspection_id, li.inspected_on, li.revision,
-             iv.default_months, iv.below_good_months,
-             (select max(${areaRank(scope.twentyPercentRule)}) from coating_areas ca
-               where ca.org_id = ${orgId}::uuid and ca.inspection_id = li.id) as rating_rank
+             iv.default_months, iv.below_good_months, cr.rating_rank
       from tanks t
       join vessels v on v.id = t.vessel_id and v.org_id = ${orgId}::uuid
       left join lateral (
@@ -70,6 +68,10 @@ function datedTanks(scope: TFleetScope): SQL {
         order by ii.vessel_id nulls last
         limit 1
       ) iv on true
+      left join lateral (
+        select max(${areaRank(scope.twentyPercentRule)}) as rating_rank from coating_areas ca
+        where ca.org_id = ${orgId}::uuid and ca.inspection_id = li.id
+      ) cr on true
       where t.org_id = ${orgId}::uuid ${vesselWhere}
     ), dated as (
       select s.*,
