@@ -14,6 +14,7 @@ const utc = (iso: string) => `${iso.slice(0, 10)} ${iso.slice(11, 16)} UTC`;
 export function SharePanel({ inspectionId }: { inspectionId: string }) {
   const [state, setState] = useState<TState | null>(null);
   const [surveyor, setSurveyor] = useState("");
+  const [invite, setInvite] = useState({ name: "", email: "" });
   const [message, setMessage] = useState<{ tone: "success" | "error"; text: string } | null>(null);
   const load = useCallback(async () => {
     const res = await fetch(`/api/v1/inspections/${inspectionId}/shares`, { cache: "no-store" });
@@ -25,6 +26,14 @@ export function SharePanel({ inspectionId }: { inspectionId: string }) {
     e.preventDefault();
     const res = await postJson<{ shared: boolean; surveyor: { name: string } }>(`/api/v1/inspections/${inspectionId}/shares`, { surveyorUserId: surveyor });
     setMessage(res.ok ? { tone: "success", text: res.body.shared ? `Shared with ${res.body.surveyor.name}; they have been told by e-mail.` : `Already shared with ${res.body.surveyor.name}.` } : { tone: "error", text: res.message });
+    await load();
+  }
+
+  async function inviteByEmail(e: React.FormEvent) {
+    e.preventDefault();
+    const res = await postJson<{ shared: boolean; invited: boolean; surveyor: { name: string } }>(`/api/v1/inspections/${inspectionId}/shares`, invite);
+    if (res.ok) setInvite({ name: "", email: "" });
+    setMessage(res.ok ? { tone: "success", text: res.body.invited ? `${res.body.surveyor.name} is invited: an e-mail with a link to choose a password and read the report is on its way.` : `Shared with ${res.body.surveyor.name}.` } : { tone: "error", text: res.message });
     await load();
   }
 
@@ -56,7 +65,20 @@ export function SharePanel({ inspectionId }: { inspectionId: string }) {
             </div>
             <Button type="submit" variant="secondary" disabled={!surveyor}>Share the signed report</Button>
           </form>
-        ) : <p className="text-slate-600">The company has no surveyor account yet: the administrator adds one (role surveyor) on the users page.</p>
+        ) : <p className="text-slate-600">The company has no surveyor account yet: invite one below.</p>
+      ) : null}
+      {state.canShare ? (
+        <form onSubmit={inviteByEmail} className="mt-2 flex flex-wrap items-end gap-2" aria-label="Invite a surveyor by e-mail">
+          <label className="block">
+            <span className="block text-sm font-semibold text-slate-800">Surveyor&apos;s name</span>
+            <input value={invite.name} onChange={(e) => setInvite({ ...invite, name: e.target.value })} className="mt-1 rounded-md border border-slate-300 px-2 py-2" required />
+          </label>
+          <label className="block">
+            <span className="block text-sm font-semibold text-slate-800">Surveyor&apos;s e-mail</span>
+            <input type="email" value={invite.email} onChange={(e) => setInvite({ ...invite, email: e.target.value })} className="mt-1 rounded-md border border-slate-300 px-2 py-2" required />
+          </label>
+          <Button type="submit" variant="secondary">Invite and share</Button>
+        </form>
       ) : null}
     </div>
   );

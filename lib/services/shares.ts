@@ -3,7 +3,11 @@ import "server-only";
 // one of the company's surveyors; the surveyor sees only what was shared and
 // acknowledges it; the office sees who acknowledged what and when.
 import { z } from "zod";
+import { randomBytes } from "node:crypto";
 import { getOrganisation } from "@/db/queries/organisations";
+import { unsafeIssueResetToken } from "@/db/queries/password-reset";
+import { addMembership, createOrgUser, getUserWithMemberships, unsafeGetUserByEmail } from "@/db/queries/users";
+import { hashPassword } from "@/lib/auth/password";
 import * as q from "@/db/queries/shares";
 import { getReportFile } from "@/db/queries/signing";
 import type { TActor } from "@/lib/auth/actor";
@@ -14,9 +18,34 @@ import { validateInput } from "@/lib/http/route";
 import { sendMail } from "@/lib/mail/mailer";
 import { ZAcknowledgeInput, ZShareInput } from "@/lib/schemas/share";
 import { presignDownload } from "@/lib/storage/s3";
-import { reportSharedEmail } from "@/templates/email/report-shared";
+import { reportSharedEmail, surveyorInvitationEmail } from "@/templates/email/report-shared";
+import { newResetToken, resetLink } from "./password-reset";
 import { readInspectionView } from "./inspections";
 import { VESSEL_READERS } from "./vessels";
+
+/** How long an invitation's "choose your password" link works. */
+export const INVITATION_TTL_SECONDS = 7 * 24 * 60 * 60;
+
+/**
+ * The surveyor behind an e-mail address: an existing account becomes a
+ * surveyor of this company (only if it holds no other kind of role anywhere);
+ * an unknown address gets an account with no usable password and a link to choose one.
+ */
+async function inviteSurveyor(actor: TActor, orgId: string, input: { email: string; name: string }) {
+  const existing = await unsafeGetUserByEmail({ email: input.email });
+  if (existing) {
+    const roles = (await getUserWithMemberships({ userId: existing.id }))?.memberships ?? [];
+    if (existing.disabledAt || roles.some((m) => m.role !== "surveyor")) {
+      throw new AppError("bad_request", "Check email: this address belongs to an account that is not a class surveyor's; share with a surveyor's address.", [{ path: "email", message: "is not a surveyor's account" }]);
+    }
+    if (!roles.some((m) => m.orgId === orgId)) await addMembership({ orgId, actorUserId: actor.userId, userId: existing.id, role: "surveyor" });
+    return { surveyor: { id: existing.id, name: existing.name, email: existing.email }, inviteLink: null };
+  }
+  const user = await createOrgUser({ orgId, actorUserId: actor.userId, input: { email: input.email, name: input.name, role: "surveyor", passwordHash: await hashPassword(randomBytes(32).toString("base64url")) } });
+  const { token, tokenHash } = newResetToken();
+  await unsafeIssueResetToken({ userId: user.id, tokenHash, ttlSeconds: INVITATION_TTL_SECONDS, maxPerWindow: 1, windowSeconds: 60 });
+  return { surveyor: { id: user.id, name: user.name, email: user.email }, inviteLink: resetLink(serverEnv().APP_URL, token) };
+}
 
 /** Who shares reports with class: the office. */
 export const SHARERS = ["superintendent", "admin"] as const;
@@ -39,10 +68,19 @@ export async function shareReportAs(actor: TActor, inspectionId: string, body: u
     throw new AppError("conflict", `Only a countersigned report can be shared with class; this one is ${view.inspection.status}.`, [{ path: "status", message: view.inspection.status }]);
   }
   if (!(await getReportFile({ orgId: auth.orgId, inspectionId }))) throw new AppError("conflict", "The signed PDF is still being prepared: share it in a minute.");
-  const surveyor = (await q.listOrgSurveyors({ orgId: auth.orgId })).find((u) => u.id === input.surveyorUserId);
-  if (!surveyor) throw new AppError("bad_request", "Check surveyorUserId: it is not a surveyor of this company.", [{ path: "surveyorUserId", message: "is not a surveyor of this company" }]);
+  let surveyor: { id: string; name: string; email: string } | undefined;
+  let inviteLink: string | null = null;
+  if ("surveyorUserId" in input) {
+    surveyor = (await q.listOrgSurveyors({ orgId: auth.orgId })).find((u) => u.id === input.surveyorUserId);
+    if (!surveyor) throw new AppError("bad_request", "Check surveyorUserId: it is not a surveyor of this company.", [{ path: "surveyorUserId", message: "is not a surveyor of this company" }]);
+  } else {
+    ({ surveyor, inviteLink } = await inviteSurveyor(actor, auth.orgId, input));
+  }
   const row = await q.insertShare({ orgId: auth.orgId, inspectionId, surveyorUserId: surveyor.id, sharedBy: actor.userId });
-  if (row) {
+  if (inviteLink) {
+    const mail = surveyorInvitationEmail({ company: (await getOrganisation({ orgId: auth.orgId }))?.name ?? "", invitedBy: actor.name, name: surveyor.name, link: inviteLink, vesselName: view.vessel.name, tankCode: view.tank.code });
+    await sendMail({ to: surveyor.email, ...mail }).catch((error) => console.error("[tankwright] surveyor invitation e-mail failed", error));
+  } else if (row) {
     const env = serverEnv();
     const mail = reportSharedEmail({
       company: (await getOrganisation({ orgId: auth.orgId }))?.name ?? "",
@@ -52,7 +90,7 @@ export async function shareReportAs(actor: TActor, inspectionId: string, body: u
     // The share stands even if the notice cannot be sent; the surveyor sees it on their list.
     await sendMail({ to: surveyor.email, ...mail }).catch((error) => console.error("[tankwright] share notice e-mail failed", error));
   }
-  return { shared: Boolean(row), surveyor: { id: surveyor.id, name: surveyor.name } };
+  return { shared: Boolean(row), invited: Boolean(inviteLink), surveyor: { id: surveyor.id, name: surveyor.name } };
 }
 
 export async function unshareReportAs(actor: TActor, inspectionId: string, shareId: string) {

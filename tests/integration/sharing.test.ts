@@ -4,8 +4,8 @@
 import { createHash } from "node:crypto";
 import { eq } from "drizzle-orm";
 import { beforeAll, describe, expect, it } from "vitest";
-import { inspections, reportFiles, reportShares } from "@/db/schema";
-import { signIn, type TClient } from "../fixtures/http";
+import { inspections, memberships, reportFiles, reportShares, users } from "@/db/schema";
+import { anonymousClient, signIn, trySignIn, type TClient } from "../fixtures/http";
 import { waitForMail } from "../fixtures/mail";
 import { buildScenario, PASSWORD, testDb, type TScenario } from "../fixtures/scenario";
 
@@ -95,5 +95,30 @@ describe("sharing a report with class", () => {
     expect((await officer.request(`/api/v1/inspections/${shared}/shares/${shares[0]!.id}`, { method: "DELETE" })).status).toBe(403);
     expect((await superintendent.request(`/api/v1/inspections/${shared}/shares/${shares[0]!.id}`, { method: "DELETE" })).status).toBe(200);
     expect(((await (await surveyor.request("/api/v1/shares")).json()) as TMine).shares).toEqual([]);
+  });
+
+  it("invites a surveyor who has no account: the e-mail's link sets a password, and the report is waiting", async () => {
+    const email = `new-surveyor-${s.run}@society.tankwright.test`;
+    const res = await superintendent.request(`/api/v1/inspections/${shared}/shares`, { method: "POST", json: { email, name: "New Surveyor" } });
+    expect(res.status).toBe(201);
+    expect(((await res.json()) as { invited: boolean }).invited).toBe(true);
+    const user = (await testDb().query.users.findFirst({ where: eq(users.email, email) }))!;
+    expect((await testDb().select().from(memberships).where(eq(memberships.userId, user.id))).map((m) => [m.orgId, m.role])).toEqual([[s.org.id, "surveyor"]]);
+    const mail = await waitForMail({ to: email, subjectIncludes: "shared a ballast tank report" });
+    const token = decodeURIComponent(mail.text.match(/reset-password\?token=([A-Za-z0-9_%-]+)/)![1]!);
+    // No password works until the surveyor chooses one.
+    expect((await trySignIn(email, "")).signedIn).toBe(false);
+    const set = await anonymousClient().request("/api/v1/password-reset/confirm", { method: "POST", json: { token, password: "surveyor-chosen-password", passwordAgain: "surveyor-chosen-password" } });
+    expect(set.status).toBe(200);
+    const invited = await signIn(email, "surveyor-chosen-password");
+    expect(((await (await invited.request("/api/v1/shares")).json()) as TMine).shares.map((x) => x.vessel)).toEqual([s.ownVessel.name]);
+  });
+
+  it("refuses to invite an address whose account is not a surveyor's (400), and creates nothing", async () => {
+    const before = await testDb().$count(reportShares, eq(reportShares.inspectionId, shared));
+    const res = await superintendent.request(`/api/v1/inspections/${shared}/shares`, { method: "POST", json: { email: s.users.officer.email, name: "Test officer" } });
+    expect(res.status).toBe(400);
+    expect(((await res.json()) as TErr).error.issues[0]!.path).toBe("email");
+    expect(await testDb().$count(reportShares, eq(reportShares.inspectionId, shared))).toBe(before);
   });
 });
