@@ -5,6 +5,8 @@ export function navLinks(memberships: readonly TMembershipLike[]) {
   const roles = new Set(memberships.map((m) => m.role));
   const links: { href: string; label: string }[] = [];
   if (roles.has("superintendent") || roles.has("admin")) links.push({ href: "/fleet", label: "Fleet" });
+  // The ship sees its own tanks' ratings and due dates on the same page.
+  else if (roles.has("officer") || roles.has("master")) links.push({ href: "/fleet", label: "Tanks due" });
   if (roles.has("officer") || roles.has("master") || roles.has("superintendent") || roles.has("admin")) {
     links.push({ href: "/vessels", label: "Vessels" });
   }

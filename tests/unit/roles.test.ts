@@ -63,5 +63,6 @@ describe("visible vessels", () => {
   it("navigation follows the roles", () => {
     expect(navLinks([{ orgId: A, role: "surveyor", vesselId: null }]).map((l) => l.href)).toEqual(["/shared"]);
     expect(navLinks([{ orgId: A, role: "admin", vesselId: null }]).map((l) => l.href)).toEqual(["/fleet", "/vessels", "/admin", "/account"]);
+    expect(navLinks([{ orgId: A, role: "officer", vesselId: "v1" }]).map((l) => l.label)).toEqual(["Tanks due", "Vessels"]);
   });
 });
