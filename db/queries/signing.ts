@@ -257,3 +257,16 @@ export async function getInspectionForRender({ orgId, inspectionId }: TIns) {
     .where(and(eq(inspections.orgId, orgId), eq(inspections.id, inspectionId)));
   return row ?? null;
 }
+
+/**
+ * Countersigned revisions whose signed PDF is missing (a lost render job, or a
+ * report countersigned before the workers ran), across companies, for the sweep.
+ */
+export async function unsafeListCountersignedWithoutPdf(limit = 100) {
+  return db()
+    .select({ orgId: inspections.orgId, inspectionId: inspections.id })
+    .from(inspections)
+    .leftJoin(reportFiles, eq(reportFiles.inspectionId, inspections.id))
+    .where(and(inArray(inspections.status, ["countersigned", "superseded"]), sql`${reportFiles.id} is null`))
+    .limit(limit);
+}

@@ -98,6 +98,21 @@ export async function seedDemo(db: TDb): Promise<boolean> {
       team: ["Maren Oduya, Chief Officer", "Pell Arkady, Bosun"], createdBy: users.officer!,
     }).returning();
     await fillInspection(tx, { orgId, inspectionId: ready!.id, frameFrom: tank!.frameFrom, testedAt: new Date("2026-11-28T00:45:00Z"), measuredBy: "Maren Oduya", standbyPerson: "Pell Arkady, Bosun" });
+
+    // An earlier report, signed and countersigned: the fleet overview, the tank history and the work list start from it.
+    // Its PDF is rendered by the app's worker when it starts (countersigned reports without a PDF are queued).
+    const earlierTank = await tx.query.tanks.findFirst({ where: (t, { and, eq: is }) => and(is(t.vesselId, skerry.id), is(t.code, "No. 2 DB WBT P")) });
+    const signedAt = new Date("2026-05-13T02:10:00Z");
+    const [earlier] = await tx.insert(s.inspections).values({
+      orgId, vesselId: skerry.id, tankId: earlierTank!.id, inspectedOn: "2026-05-12", placeKind: "anchorage", place: "Averly Roads anchorage",
+      team: ["Maren Oduya, Chief Officer", "Pell Arkady, Bosun"], createdBy: users.officer!,
+    }).returning();
+    await fillInspection(tx, { orgId, inspectionId: earlier!.id, frameFrom: earlierTank!.frameFrom, testedAt: new Date("2026-05-12T01:30:00Z"), measuredBy: "Maren Oduya", standbyPerson: "Pell Arkady, Bosun" });
+    await tx.update(s.inspections).set({ status: "countersigned", submittedAt: signedAt, countersignedAt: signedAt, lockedAt: signedAt, version: 3 }).where(eq(s.inspections.id, earlier!.id));
+    await tx.insert(s.signatures).values([
+      { orgId, inspectionId: earlier!.id, userId: users.officer!, kind: "officer", signerName: "Maren Oduya", signerRank: "Chief Officer", typedSignature: "Maren Oduya", signedAt },
+      { orgId, inspectionId: earlier!.id, userId: users.master!, kind: "master", signerName: "Tomas Revell", signerRank: "Master", typedSignature: "Tomas Revell", signedAt },
+    ]);
   });
   return true;
 }

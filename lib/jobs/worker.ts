@@ -6,6 +6,7 @@ import { runEmailDelivery, type TEmailDeliveryJob } from "./email-delivery";
 import { runPhotoVariants, type TPhotoVariantsJob } from "./photo-variants";
 import { jobQueue, QUEUES } from "./queue";
 import { runReportRender, type TReportRenderJob } from "./report-render";
+import { requeueMissingReports } from "./report-sweep";
 import { runUploadsCleanup } from "./uploads-cleanup";
 
 export async function startWorkers() {
@@ -20,7 +21,8 @@ export async function startWorkers() {
   await boss.work<TEmailDeliveryJob>(QUEUES.emailDelivery, { batchSize: 1, pollingIntervalSeconds: 1 }, async ([job]) => {
     if (job) return runEmailDelivery(job.data);
   });
-  await boss.work(QUEUES.uploadsCleanup, { batchSize: 1, pollingIntervalSeconds: 30 }, async () => runUploadsCleanup());
+  await boss.work(QUEUES.uploadsCleanup, { batchSize: 1, pollingIntervalSeconds: 30 }, async () => ({ ...(await runUploadsCleanup()), ...(await requeueMissingReports()) }));
   await boss.schedule(QUEUES.uploadsCleanup, "*/15 * * * *");
-  console.log("[tankwright] background workers started");
+  const { requeued } = await requeueMissingReports();
+  console.log(`[tankwright] background workers started${requeued ? `; ${requeued} signed PDF${requeued > 1 ? "s" : ""} to render` : ""}`);
 }
