@@ -43,6 +43,7 @@ export default async function TankPage({ params }: { params: Promise<{ vesselId:
             {canInspect(roles) ? (
               <Link href={`/vessels/${vesselId}/inspections/new?tank=${tankId}`} className="rounded-md border border-slate-300 bg-white px-3 py-2 text-sm font-semibold">Start an inspection</Link>
             ) : null}
+            <Link href={`/vessels/${vesselId}/tanks/${tankId}/history`} className="rounded-md border border-slate-300 bg-white px-3 py-2 text-sm font-semibold">History</Link>
             <Link href={`/vessels/${vesselId}/tanks/${tankId}/brief`} className="rounded-md bg-hull-700 px-3 py-2 text-sm font-semibold text-white hover:bg-hull-800">Pre-entry brief</Link>
             {canEdit ? <Link href={`/vessels/${vesselId}/tanks/${tankId}/edit`} className="rounded-md border border-slate-300 bg-white px-3 py-2 text-sm font-semibold">Edit tank</Link> : null}
           </>

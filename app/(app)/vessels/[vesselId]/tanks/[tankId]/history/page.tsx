@@ -1,0 +1,137 @@
+import type { Metadata } from "next";
+import Link from "next/link";
+import { RatingMark } from "@/components/fleet/rating-mark";
+import { HistoryPlot } from "@/components/history/history-plot";
+import { Notice } from "@/components/ui/notice";
+import { PageHeader } from "@/components/ui/page-header";
+import { Cell, Table } from "@/components/ui/table";
+import { pageActor, pageAuthorize } from "@/lib/auth/page";
+import { layoutLineChart } from "@/lib/office/history-chart";
+import { getTankHistoryAs } from "@/lib/services/history";
+import { formatFrames } from "@/lib/structure/frames";
+import { FINDING_TYPE_LABELS, INSPECTION_STATUS_LABELS, MEMBER_KIND_LABELS, PLATING_REGION_LABELS } from "@/lib/vocabulary";
+
+export const metadata: Metadata = { title: "Tank history" };
+
+const fmt = (n: number, digits = 1) => n.toFixed(digits);
+
+export default async function TankHistoryPage({ params }: { params: Promise<{ vesselId: string; tankId: string }> }) {
+  const { vesselId, tankId } = await params;
+  const actor = await pageActor();
+  const h = await pageAuthorize(() => getTankHistoryAs(actor, vesselId, tankId));
+  const dates = [...new Set(h.coating.flatMap((s) => s.points.map((p) => p.date)))].sort();
+
+  const coatingChart = layoutLineChart({
+    title: "Coating breakdown per area over time",
+    yLabel: "Breakdown (%)",
+    series: h.coating.map((s) => ({ key: s.area, label: s.label, points: s.points.map((p) => ({ date: p.date, value: p.breakdownPct })) })),
+    height: 340,
+  });
+  const last = h.anodes.points[h.anodes.points.length - 1];
+  const projection = h.anodes.projection;
+  const anodeChart = layoutLineChart({
+    title: "Mean anode wastage over time",
+    yLabel: "Mean wastage (%)",
+    series: [{ key: "mean", label: "Mean wastage", points: h.anodes.points.map((p) => ({ date: p.date, value: p.meanWastagePct })) }],
+    threshold: { value: h.anodes.thresholdPct, label: `Renewal threshold ${fmt(h.anodes.thresholdPct, 0)} %` },
+    extraDates: projection ? [projection.date] : [],
+    projection: projection && last && projection.date > last.date ? { from: { date: last.date, value: last.meanWastagePct }, to: { date: projection.date, value: h.anodes.thresholdPct }, label: `projected ${projection.date}` } : undefined,
+  });
+  const sedimentChart = layoutLineChart({
+    title: "Sediment volume over time",
+    yLabel: "Sediment (m³)",
+    series: [{ key: "volume", label: "Sediment volume", points: h.sediment.map((p) => ({ date: p.date, value: p.volumeM3 })) }],
+  });
+  const recurring = h.findings.filter((f) => f.recurring);
+
+  return (
+    <>
+      <PageHeader
+        title={`${h.tank.code} history`}
+        subtitle={
+          <>
+            {h.tank.name} · <Link href={`/vessels/${vesselId}/tanks/${tankId}`} className="text-hull-700 underline">Tank</Link> ·{" "}
+            <Link href={`/vessels/${vesselId}`} className="text-hull-700 underline">{h.vessel.name}</Link>
+          </>
+        }
+      />
+      <div className="space-y-6">
+        <section aria-labelledby="inspections">
+          <h2 id="inspections" className="mb-2 text-lg font-semibold text-hull-900">Inspections</h2>
+          {h.inspections.length ? (
+            <Table head={["Date", "Revision", "Status", "Rating", "Report"]} caption="Inspections of the tank">
+              {h.inspections.map((i) => (
+                <tr key={i.id} data-inspection={i.id}>
+                  <Cell>{i.inspectedOn}</Cell>
+                  <Cell>{i.revision}</Cell>
+                  <Cell>{INSPECTION_STATUS_LABELS[i.status]}{i.plotted ? "" : " (not plotted)"}</Cell>
+                  <Cell>{i.rating ? <RatingMark kind={i.rating} /> : i.plotted ? <RatingMark kind="unrated" /> : "—"}</Cell>
+                  <Cell>
+                    <span className="flex flex-wrap gap-3">
+                      <Link href={i.pageUrl} className="text-hull-700 underline">Open</Link>
+                      {i.signedReportUrl ? <a href={i.signedReportUrl} className="text-hull-700 underline">Signed PDF</a> : null}
+                    </span>
+                  </Cell>
+                </tr>
+              ))}
+            </Table>
+          ) : (
+            <Notice>This tank has not been inspected yet.</Notice>
+          )}
+          <p className="mt-2 text-sm text-slate-600">Only countersigned and superseded inspections are plotted: their measurements are signed.</p>
+        </section>
+
+        <HistoryPlot
+          id="coating"
+          title="Coating breakdown per area"
+          chart={coatingChart}
+          head={["Area", ...dates]}
+          rows={h.coating.map((s) => [s.label, ...dates.map((d) => { const p = s.points.find((x) => x.date === d); return p ? `${fmt(p.breakdownPct)} %` : "—"; })])}
+        />
+        <HistoryPlot
+          id="anodes"
+          title="Mean anode wastage"
+          chart={anodeChart}
+          note={
+            projection ? (
+              <p data-projection={projection.date}>
+                At {fmt(projection.ratePctPerYear)} % a year (least-squares line through the signed inspections), the mean wastage reaches the company&apos;s renewal threshold of {fmt(h.anodes.thresholdPct, 0)} % on <strong>{projection.date}</strong>.
+              </p>
+            ) : (
+              <p>No projection: it needs two signed inspections on different dates with growing wastage.</p>
+            )
+          }
+          head={["Date", "Mean wastage", "Anodes to renew"]}
+          rows={h.anodes.points.map((p) => [p.date, `${fmt(p.meanWastagePct)} %`, p.toRenewCount])}
+        />
+        <HistoryPlot
+          id="sediment"
+          title="Sediment volume"
+          chart={sedimentChart}
+          head={["Date", "Volume", "Zones"]}
+          rows={h.sediment.map((p) => [p.date, `${fmt(p.volumeM3, 2)} m³`, p.zones])}
+        />
+
+        <section aria-labelledby="recurring" className="rounded-lg border border-slate-200 bg-white p-4">
+          <h2 id="recurring" className="mb-2 text-lg font-semibold text-hull-900">Findings found again</h2>
+          <p className="mb-2 text-sm text-slate-600">A finding is recurring when a later signed inspection finds the same type of defect on the same member (kind, number, plating region) at overlapping frames.</p>
+          {recurring.length ? (
+            <Table head={["Date", "No.", "Finding", "Where", "Found before"]} caption="Recurring findings">
+              {recurring.map((f) => (
+                <tr key={f.id} data-recurring={f.id}>
+                  <Cell>{f.inspectedOn}</Cell>
+                  <Cell>{f.number}</Cell>
+                  <Cell><span className="mr-1 rounded border border-slate-700 px-1 text-xs font-bold">RECURRING</span>{FINDING_TYPE_LABELS[f.type]}: {f.description}</Cell>
+                  <Cell>{MEMBER_KIND_LABELS[f.memberKind]}{f.memberNumber != null ? ` ${f.memberNumber}` : ""}{f.platingRegion ? ` (${PLATING_REGION_LABELS[f.platingRegion]})` : ""}, {formatFrames(f.frameFrom, f.frameTo)}</Cell>
+                  <Cell>No. {f.recurring!.number} on {f.recurring!.inspectedOn}</Cell>
+                </tr>
+              ))}
+            </Table>
+          ) : (
+            <p className="text-sm">None.</p>
+          )}
+        </section>
+      </div>
+    </>
+  );
+}
