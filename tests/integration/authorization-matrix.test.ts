@@ -128,6 +128,7 @@ const CASES: TCase[] = [
     body: () => ({ frame: 80 + (++frameSerial % 20), note: "Matrix landmark" }),
     scopes: ["own", "sibling", "other"], expect: (w, sc) => (vesselEditor(w, sc) === 200 ? 201 : vesselEditor(w, sc)),
   },
+  { name: "GET /api/v1/vessels/:id/tanks/:tankId/history", path: (s, sc) => `${tankPath(s, sc)}/history`, scopes: ["own", "sibling", "other"], expect: vesselReader },
   { name: "GET /api/v1/vessels/:id/tanks/:tankId/brief.pdf", path: (s, sc) => `${tankPath(s, sc)}/brief.pdf`, scopes: ["own", "sibling", "other"], expect: vesselReader },
   {
     name: "POST /api/v1/vessels/:id/tanks/import (preview)", method: "POST", path: (s, sc) => `/api/v1/vessels/${vesselOf(s, sc).id}/tanks/import`,
@@ -139,6 +140,7 @@ const CASES: TCase[] = [
   { name: "page /vessels/:id/tanks/import", path: (s, sc) => `/vessels/${vesselOf(s, sc).id}/tanks/import`, scopes: ["own", "sibling", "other"], expect: (w, sc) => (w === "anonymous" ? 307 : vesselEditor(w, sc)) },
   { name: "page /vessels/:id/tanks/:tankId", path: (s, sc) => tankPage(s, sc), scopes: ["own", "sibling", "other"], expect: (w, sc) => (w === "anonymous" ? 307 : vesselReader(w, sc)) },
   { name: "page /vessels/:id/tanks/:tankId/edit", path: (s, sc) => `${tankPage(s, sc)}/edit`, scopes: ["own", "sibling", "other"], expect: (w, sc) => (w === "anonymous" ? 307 : vesselEditor(w, sc)) },
+  { name: "page /vessels/:id/tanks/:tankId/history", path: (s, sc) => `${tankPage(s, sc)}/history`, scopes: ["own", "sibling", "other"], expect: (w, sc) => (w === "anonymous" ? 307 : vesselReader(w, sc)) },
   { name: "page /vessels/:id/tanks/:tankId/brief", path: (s, sc) => `${tankPage(s, sc)}/brief`, scopes: ["own", "sibling", "other"], expect: (w, sc) => (w === "anonymous" ? 307 : vesselReader(w, sc)) },
   { name: "GET /api/v1/vessels/:id/inspections", path: (s, sc) => `/api/v1/vessels/${vesselOf(s, sc).id}/inspections`, scopes: ["own", "sibling", "other"], expect: vesselReader },
   {
