@@ -14,6 +14,10 @@ function Marker({ shape, x, y }: { shape: TChartMarker; x: number; y: number }) 
       return <path d={`M${x} ${y - s - 1} L${x + s + 1} ${y} L${x} ${y + s + 1} L${x - s - 1} ${y} Z`} fill="currentColor" {...common} />;
     case "cross":
       return <path d={`M${x - s} ${y - s} L${x + s} ${y + s} M${x - s} ${y + s} L${x + s} ${y - s}`} {...common} strokeWidth={2} />;
+    case "triangle-down":
+      return <path d={`M${x} ${y + s + 1} L${x + s + 1} ${y - s} L${x - s - 1} ${y - s} Z`} fill="currentColor" {...common} />;
+    case "dot":
+      return <circle cx={x} cy={y} r={s - 1.5} fill="currentColor" {...common} />;
     default:
       return <path d={`M${x - s - 1} ${y} L${x + s + 1} ${y} M${x} ${y - s - 1} L${x} ${y + s + 1}`} {...common} strokeWidth={2} />;
   }

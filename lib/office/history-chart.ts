@@ -3,7 +3,7 @@
 // the PDF. Readable without colour: each series has its own marker shape and
 // dash pattern, the axes carry their units, and a legend names the series.
 export type TChartSeries = { key: string; label: string; points: { date: string; value: number }[] };
-export type TChartMarker = "circle" | "square" | "triangle" | "diamond" | "cross" | "plus";
+export type TChartMarker = "circle" | "square" | "triangle" | "diamond" | "cross" | "plus" | "triangle-down" | "dot";
 export type TChartInput = {
   title: string;
   yLabel: string;
@@ -18,8 +18,9 @@ export type TChartInput = {
   height?: number;
 };
 
-export const MARKERS: readonly TChartMarker[] = ["circle", "square", "triangle", "diamond", "cross", "plus"];
-export const DASHES: readonly string[] = ["", "6 3", "2 3", "8 3 2 3", "12 4", "1 2"];
+/** Eight series (the coating areas) each get their own marker and dash. */
+export const MARKERS: readonly TChartMarker[] = ["circle", "square", "triangle", "diamond", "cross", "plus", "triangle-down", "dot"];
+export const DASHES: readonly string[] = ["", "6 3", "2 3", "8 3 2 3", "12 4", "1 2", "4 2 1 2 1 2", "16 3 4 3"];
 
 const LEGEND_PER_ROW = 3;
 const DAY_MS = 86_400_000;
@@ -56,7 +57,7 @@ export function layoutLineChart(input: TChartInput): TChartLayout {
   const width = input.width ?? 640;
   const height = input.height ?? 280;
   const legendRows = Math.ceil(input.series.length / LEGEND_PER_ROW);
-  const plot = { x: 64, y: 16, width: width - 64 - 16, height: height - 16 - 44 - 18 * legendRows };
+  const plot = { x: 64, y: 16, width: width - 64 - 44, height: height - 16 - 44 - 18 * legendRows };
   const dates = [...new Set([...input.series.flatMap((s) => s.points.map((p) => p.date)), ...(input.extraDates ?? [])])].sort();
   const values = [...input.series.flatMap((s) => s.points.map((p) => p.value)), input.threshold?.value ?? 0, input.projection?.to.value ?? 0];
   const yTickValues = niceTicks(Math.max(...values, 0));

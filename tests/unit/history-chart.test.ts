@@ -12,6 +12,13 @@ describe("niceTicks", () => {
 });
 
 describe("layoutLineChart", () => {
+  it("tells eight series apart by marker and by dash", () => {
+    const series = Array.from({ length: 8 }, (_, i) => ({ key: `s${i}`, label: `S${i}`, points: [{ date: "2025-01-01", value: i }] }));
+    const c = layoutLineChart({ title: "t", yLabel: "%", series });
+    expect(new Set(c.lines.map((l) => l.marker)).size).toBe(8);
+    expect(new Set(c.lines.map((l) => l.dash)).size).toBe(8);
+  });
+
   it("gives each series a distinct marker and dash and places dates in proportion", () => {
     const c = layoutLineChart({
       title: "t", yLabel: "%", width: 400, height: 200,

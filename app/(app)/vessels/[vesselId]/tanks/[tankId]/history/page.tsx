@@ -119,11 +119,11 @@ export default async function TankHistoryPage({ params }: { params: Promise<{ ve
             <Table head={["Date", "No.", "Finding", "Where", "Found before"]} caption="Recurring findings">
               {recurring.map((f) => (
                 <tr key={f.id} data-recurring={f.id}>
-                  <Cell>{f.inspectedOn}</Cell>
+                  <Cell className="whitespace-nowrap">{f.inspectedOn}</Cell>
                   <Cell>{f.number}</Cell>
                   <Cell><span className="mr-1 rounded border border-slate-700 px-1 text-xs font-bold">RECURRING</span>{FINDING_TYPE_LABELS[f.type]}: {f.description}</Cell>
                   <Cell>{MEMBER_KIND_LABELS[f.memberKind]}{f.memberNumber != null ? ` ${f.memberNumber}` : ""}{f.platingRegion ? ` (${PLATING_REGION_LABELS[f.platingRegion]})` : ""}, {formatFrames(f.frameFrom, f.frameTo)}</Cell>
-                  <Cell>No. {f.recurring!.number} on {f.recurring!.inspectedOn}</Cell>
+                  <Cell className="whitespace-nowrap">No. {f.recurring!.number} on {f.recurring!.inspectedOn}</Cell>
                 </tr>
               ))}
             </Table>
