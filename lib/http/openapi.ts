@@ -6,7 +6,7 @@ import "server-only";
 import { z } from "zod";
 import { ZApiTokenInput } from "@/lib/schemas/api-token";
 import { ZCommentInput } from "@/lib/schemas/comment";
-import { ZDockingDoneInput, ZDockingInput, ZDockingItemDecisionInput, ZDockingStatusInput } from "@/lib/schemas/docking";
+import { ZDockingDecisions, ZDockingDoneInput, ZDockingInput, ZDockingStatusInput } from "@/lib/schemas/docking";
 import { ZFleetQuery } from "@/lib/schemas/fleet";
 import { findingInputSchema, notInspectedInputSchema, sedimentInputSchema, ZAnodesInput, ZCoatingInput, ZEntryRecordInput, ZFindingsFlagInput, ZHeaderInput, ZInspectionStart, ZReadingInput, ZRemarksInput } from "@/lib/schemas/inspection";
 import { ZPasswordResetConfirm, ZPasswordResetRequest } from "@/lib/schemas/password-reset";
@@ -64,8 +64,6 @@ const SECTION_BODIES = {
   "photo-order": ZPhotoOrderInput,
 } as const;
 
-/** The body of PUT /api/v1/dockings/{id}/items (the same shape as ZDecisions in lib/services/dockings.ts). */
-const ZDockingDecisions = z.object({ items: z.array(z.object({ id: z.string() }).and(ZDockingItemDecisionInput)).min(1).max(1000) });
 
 const ZErrorBody = z
   .object({

@@ -63,6 +63,14 @@ export const ZDockingItemDecisionInput = z
   });
 export type TDockingItemDecisionInput = z.infer<typeof ZDockingItemDecisionInput>;
 
+/** The body of PUT /api/v1/dockings/{id}/items: decisions on one or more items at once. */
+export const ZDockingDecisions = z.object({
+  items: z
+    .array(z.object({ id: z.string({ error: "is required" }) }).and(ZDockingItemDecisionInput))
+    .min(1, "name at least one item")
+    .max(1000, "at most 1000 items at once"),
+});
+
 /** Start, complete or cancel a docking. */
 export const ZDockingStatusInput = z.object({ status: z.enum(DOCKING_STATUSES, { error: `must be one of ${DOCKING_STATUSES.join(", ")}` }) });
 

@@ -11,7 +11,7 @@ import { AppError } from "@/lib/errors";
 import { validateInput } from "@/lib/http/route";
 import { workListCsv } from "@/lib/office/work-list-csv";
 import { gatherWorkItems, priceWorkList, WORK_KINDS, type TWorkKind, type TWorkSource } from "@/lib/office/work-list";
-import { ZDockingDoneInput, ZDockingInput, ZDockingItemDecisionInput, ZDockingStatusInput } from "@/lib/schemas/docking";
+import { ZDockingDecisions, ZDockingDoneInput, ZDockingInput, ZDockingStatusInput } from "@/lib/schemas/docking";
 import { DOCKING_STATUS_LABELS, type TRole } from "@/lib/vocabulary";
 
 /** Who plans dockings and reads their work lists: the office. */
@@ -69,17 +69,10 @@ export async function getDockingAs(actor: TActor, dockingId: string) {
   };
 }
 
-const ZDecisions = z.object({
-  items: z
-    .array(z.object({ id: z.string({ error: "is required" }) }).and(ZDockingItemDecisionInput))
-    .min(1, "name at least one item")
-    .max(1000, "at most 1000 items at once"),
-});
-
 /** Include, exclude or adjust items; every exclusion and adjustment needs a reason, and each change is audit-logged. */
 export async function decideDockingItemsAs(actor: TActor, dockingId: string, body: unknown) {
   const { orgId } = await authorizeDocking(actor, dockingId);
-  const input = validateInput(ZDecisions, body);
+  const input = validateInput(ZDockingDecisions, body);
   const issues = input.items.flatMap((d, n) =>
     !d.included && !d.adjustmentReason ? [{ path: `items.${n}.adjustmentReason`, message: "is required: say why the item is excluded" }] : [],
   );
