@@ -6,6 +6,7 @@ import "server-only";
 import { z } from "zod";
 import { ZApiTokenInput } from "@/lib/schemas/api-token";
 import { ZCommentInput } from "@/lib/schemas/comment";
+import { ZIntervalsInput } from "@/lib/schemas/intervals";
 import { ZDockingDecisions, ZDockingDoneInput, ZDockingInput, ZDockingStatusInput } from "@/lib/schemas/docking";
 import { ZFleetQuery } from "@/lib/schemas/fleet";
 import { findingInputSchema, notInspectedInputSchema, sedimentInputSchema, ZAnodesInput, ZCoatingInput, ZEntryRecordInput, ZFindingsFlagInput, ZHeaderInput, ZInspectionStart, ZReadingInput, ZRemarksInput } from "@/lib/schemas/inspection";
@@ -166,6 +167,10 @@ export const API_OPERATIONS: TApiOperation[] = [
     body: ZVerifyInput, rawBody: { contentTypes: [PDF, "multipart/form-data"], description: "The PDF itself, or a form with a \"file\" field." },
     response: ok("Vessel, tank, date and revision of the signed report, or that it is not one."),
   },
+  // ---- company settings
+  { method: "get", path: "/api/v1/settings/intervals", tag: "Fleet", summary: "The company's inspection intervals and the vessels with their own (office)", response: ok("The intervals.") },
+  { method: "put", path: "/api/v1/settings/intervals", tag: "Fleet", summary: "Set the company's or one vessel's inspection intervals (office)", body: ZIntervalsInput, response: ok("The intervals as saved.") },
+  { method: "delete", path: "/api/v1/settings/intervals", tag: "Fleet", summary: "A vessel goes back to the company's intervals (?vesselId=)", response: ok("Done.") },
   // ---- comments from the office
   { method: "get", path: "/api/v1/inspections/{inspectionId}/comments", tag: "Reports", summary: "Comments on the report and its findings", response: ok("The comments, oldest first, and whether you may add one.") },
   { method: "post", path: "/api/v1/inspections/{inspectionId}/comments", tag: "Reports", summary: "Comment on the report or one finding (office); the ship is told by e-mail", body: ZCommentInput, response: ok("The new comment.", 201) },

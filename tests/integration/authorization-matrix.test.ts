@@ -249,6 +249,15 @@ const CASES: TCase[] = [
     name: "POST /api/v1/inspections/:id/comments", method: "POST", path: (s, sc) => `${inspectionPath(s, sc)}/comments`,
     body: () => ({ body: "Matrix: a comment from the office." }), scopes: ["own", "sibling", "other"], expect: (w, sc) => officeOnly(w, sc, 201),
   },
+  { name: "GET /api/v1/settings/intervals", path: () => "/api/v1/settings/intervals", scopes: ["own"], expect: (w) => (w === "anonymous" ? 401 : w === "superintendent" || w === "admin" ? 200 : 403) },
+  {
+    name: "PUT /api/v1/settings/intervals", method: "PUT", path: () => "/api/v1/settings/intervals", body: () => ({ defaultMonths: 12, belowGoodMonths: 6 }),
+    scopes: ["own"], expect: (w) => (w === "anonymous" ? 401 : w === "superintendent" || w === "admin" ? 200 : 403),
+  },
+  {
+    name: "DELETE /api/v1/settings/intervals (a vessel without its own)", method: "DELETE", path: (s, sc) => `/api/v1/settings/intervals?vesselId=${vesselOf(s, sc).id}`,
+    scopes: ["own", "other"], expect: (w) => (w === "anonymous" ? 401 : w === "superintendent" || w === "admin" ? 404 : 403),
+  },
   {
     name: "POST /api/v1/verify (open to anyone)", method: "POST", path: () => "/api/v1/verify",
     body: () => ({ fingerprint: "0".repeat(64) }), scopes: ["own"], expect: () => 200,

@@ -3,6 +3,7 @@ import { FleetCounts } from "@/components/fleet/fleet-counts";
 import { FleetFilters } from "@/components/fleet/fleet-filters";
 import { FleetPager } from "@/components/fleet/fleet-pager";
 import { FleetTankTable } from "@/components/fleet/fleet-tank-table";
+import { IntervalSettings } from "@/components/fleet/interval-settings";
 import { RatingMark } from "@/components/fleet/rating-mark";
 import { VesselTable } from "@/components/fleet/vessel-table";
 import { Notice } from "@/components/ui/notice";
@@ -12,6 +13,7 @@ import { listVessels } from "@/db/queries/vessels";
 import { pageActor, pageAuthorize } from "@/lib/auth/page";
 import type { TFleetQuery } from "@/lib/schemas/fleet";
 import { authorizeFleetQuery, getFleetOverviewAs, resolveFleetScope } from "@/lib/services/fleet";
+import { INTERVAL_KEEPERS, listIntervalsAs } from "@/lib/services/intervals";
 
 export const metadata: Metadata = { title: "Fleet" };
 
@@ -59,6 +61,8 @@ export default async function FleetPage({ searchParams }: { searchParams: Promis
   const overview = await getFleetOverviewAs(actor, q);
   const scopeName = q.vessel ? overview.vessels.find((v) => v.id === q.vessel)?.name : undefined;
   const showVesselList = !q.vessel && overview.vessels.length > 1;
+  const keepsIntervals = actor.memberships.some((m) => m.orgId === overview.orgId && (INTERVAL_KEEPERS as readonly string[]).includes(m.role));
+  const intervals = keepsIntervals ? await listIntervalsAs(actor) : null;
   return (
     <>
       <PageHeader
@@ -74,6 +78,7 @@ export default async function FleetPage({ searchParams }: { searchParams: Promis
         </p>
         {overview.tanks.length ? <FleetTankTable tanks={overview.tanks} /> : <Notice>No tank matches these filters.</Notice>}
         <FleetPager {...overview.paging} hrefFor={(page) => fleetHref({ ...q, page })} />
+        {intervals ? <IntervalSettings company={intervals.company} overrides={intervals.vessels} vessels={overview.vessels.map((v) => ({ id: v.id, name: v.name }))} /> : null}
         {showVesselList ? (
           <section className="space-y-2">
             <h2 className="text-lg font-semibold text-hull-900">Vessels</h2>
