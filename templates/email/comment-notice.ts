@@ -1,5 +1,5 @@
 // The notice to a vessel's officers and master that the office commented on a report.
-const esc = (s: string) => s.replace(/&/g, "&amp;").replace(/</g, "&lt;").replace(/>/g, "&gt;").replace(/"/g, "&quot;");
+import { escapeHtml as esc } from "./escape";
 
 export function commentNoticeEmail(m: { author: string; vesselName: string; tankCode: string; inspectedOn: string; findingNumber: number | null; body: string; url: string }) {
   const about = m.findingNumber ? `finding ${m.findingNumber} of the report` : "the report";

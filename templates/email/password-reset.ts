@@ -1,5 +1,6 @@
 // The e-mail with a link to choose a new password. Plain text first; the HTML
 // says the same, with no remote images or fonts.
+import { escapeHtml as esc } from "./escape";
 
 export type TPasswordResetEmail = {
   name: string;
@@ -7,8 +8,6 @@ export type TPasswordResetEmail = {
   /** When the link stops working, e.g. "2026-03-14 10:30 UTC". */
   expires: string;
 };
-
-const esc = (s: string) => s.replace(/&/g, "&amp;").replace(/</g, "&lt;").replace(/>/g, "&gt;").replace(/"/g, "&quot;");
 
 export function passwordResetEmail(m: TPasswordResetEmail) {
   const subject = "Tankwright: choose a new password";

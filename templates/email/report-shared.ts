@@ -1,5 +1,5 @@
 // The notice to a class surveyor that a countersigned report was shared with them.
-const esc = (s: string) => s.replace(/&/g, "&amp;").replace(/</g, "&lt;").replace(/>/g, "&gt;").replace(/"/g, "&quot;");
+import { escapeHtml as esc } from "./escape";
 
 export function reportSharedEmail(m: { company: string; vesselName: string; tankCode: string; inspectedOn: string; revision: number; url: string; sharedBy: string }) {
   const subject = `Report shared with you: ${m.vesselName}, tank ${m.tankCode}, ${m.inspectedOn}, revision ${m.revision}`;

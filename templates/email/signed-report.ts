@@ -1,5 +1,6 @@
 // The e-mail that carries a countersigned report to the office and to class.
 // Plain text first; the HTML says the same, with no remote images or fonts.
+import { escapeHtml as esc } from "./escape";
 
 export type TSignedReportEmail = {
   vesselName: string; imoNumber: string; tankCode: string; tankName: string; inspectedOn: string; place: string;
@@ -7,8 +8,6 @@ export type TSignedReportEmail = {
   /** A download link when the PDF is too large to attach, with the time it stops working. */
   link: string | null; linkExpires: string | null;
 };
-
-const esc = (s: string) => s.replace(/&/g, "&amp;").replace(/</g, "&lt;").replace(/>/g, "&gt;").replace(/"/g, "&quot;");
 
 export function signedReportEmail(m: TSignedReportEmail) {
   const subject = `Ballast tank report: ${m.vesselName} (IMO ${m.imoNumber}), tank ${m.tankCode}, ${m.inspectedOn}, revision ${m.revision}`;
