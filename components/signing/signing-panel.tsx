@@ -15,21 +15,18 @@ export type TPanelState = {
   returnComments: { id: string; body: string; createdAt: string; authorName: string; authorRank: string | null }[];
   report: { sha256: string; sizeBytes: number; createdAt: string } | null;
   revisions: { id: string; revision: number; status: string; countersignedAt: string | null; sha256: string | null }[];
-  roles: string[];
+  may: { countersign: boolean; returnIt: boolean; revise: boolean; resend: boolean };
 };
 
 const utc = (iso: string) => `${iso.slice(0, 10)} ${iso.slice(11, 16)} UTC`;
 const who = (s: TSignature) => `${s.signerName}${s.signerRank ? `, ${s.signerRank}` : ""}`;
 
 /** Where the report stands on its way to class, and the one next step this user may take. */
-export function SigningPanel({ inspectionId, status, revision, state, actor }: { inspectionId: string; status: string; revision: number; state: TPanelState; actor: { userId: string; name: string } }) {
+export function SigningPanel({ inspectionId, status, revision, state, actor }: { inspectionId: string; status: string; revision: number; state: TPanelState; actor: { name: string } }) {
   const router = useRouter();
   const refresh = () => router.refresh();
   const officer = state.signatures.find((s) => s.kind === "officer");
   const master = state.signatures.find((s) => s.kind === "master");
-  const isMaster = state.roles.includes("master");
-  const isInspector = isMaster || state.roles.includes("officer");
-  const latest = state.revisions.at(-1);
   const signed = status === "countersigned" || status === "superseded";
 
   // While the signed PDF is being made, look again every few seconds.
@@ -55,10 +52,10 @@ export function SigningPanel({ inspectionId, status, revision, state, actor }: {
           <a className="underline" href={`/inspections/${inspectionId}/report`}>the page to read on screen</a>.
         </Notice>
       ) : null}
-      {status === "submitted" && isMaster && officer?.userId !== actor.userId ? (
+      {state.may.countersign || state.may.returnIt ? (
         <div className="grid gap-3 lg:grid-cols-2">
-          <ReturnForm inspectionId={inspectionId} onDone={refresh} />
-          <SignForm inspectionId={inspectionId} action="countersign" signerName={actor.name} onDone={refresh} />
+          {state.may.returnIt ? <ReturnForm inspectionId={inspectionId} onDone={refresh} /> : null}
+          {state.may.countersign ? <SignForm inspectionId={inspectionId} action="countersign" signerName={actor.name} onDone={refresh} /> : null}
         </div>
       ) : null}
 
@@ -77,9 +74,9 @@ export function SigningPanel({ inspectionId, status, revision, state, actor }: {
           ) : (
             <p role="status">The signed PDF is being prepared; this page updates by itself.</p>
           )}
-          {state.report ? <DeliveryLog inspectionId={inspectionId} canResend={state.roles.includes("superintendent") || state.roles.includes("admin")} /> : null}
+          {state.report ? <DeliveryLog inspectionId={inspectionId} canResend={state.may.resend} /> : null}
           {state.report ? <SharePanel inspectionId={inspectionId} /> : null}
-          {isInspector && latest?.id === inspectionId && status === "countersigned" ? <ReviseButton inspectionId={inspectionId} next={revision + 1} /> : null}
+          {state.may.revise ? <ReviseButton inspectionId={inspectionId} next={revision + 1} /> : null}
         </div>
       ) : null}
 

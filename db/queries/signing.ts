@@ -247,10 +247,13 @@ export async function markDeliveryFailed({ orgId, deliveryId, error }: TOrg & { 
     .where(and(eq(emailDeliveries.orgId, orgId), eq(emailDeliveries.id, deliveryId)));
 }
 
-/** What the rendering job needs to know of the inspection. */
-export async function getInspectionForRender({ orgId, inspectionId }: TIns) {
+/** The few facts of an inspection that jobs, file names and notices need (not the whole view). */
+export async function getInspectionSummary({ orgId, inspectionId }: TIns) {
   const [row] = await db()
-    .select({ id: inspections.id, vesselId: inspections.vesselId, revision: inspections.revision, status: inspections.status, vesselName: vessels.name, tankCode: tanks.code })
+    .select({
+      id: inspections.id, vesselId: inspections.vesselId, seriesId: inspections.seriesId, revision: inspections.revision, status: inspections.status,
+      inspectedOn: inspections.inspectedOn, vesselName: vessels.name, tankCode: tanks.code,
+    })
     .from(inspections)
     .innerJoin(vessels, eq(vessels.id, inspections.vesselId))
     .innerJoin(tanks, eq(tanks.id, inspections.tankId))

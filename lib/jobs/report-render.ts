@@ -14,7 +14,7 @@ import { QUEUES, sendJob } from "./queue";
 export type TReportRenderJob = { orgId: string; inspectionId: string };
 
 export async function runReportRender({ orgId, inspectionId }: TReportRenderJob) {
-  const ins = await q.getInspectionForRender({ orgId, inspectionId });
+  const ins = await q.getInspectionSummary({ orgId, inspectionId });
   if (!ins || (ins.status !== "countersigned" && ins.status !== "superseded")) return { skipped: true };
   let file = await q.getReportFile({ orgId, inspectionId });
   if (!file) {

@@ -4,7 +4,7 @@ import "server-only";
 // each photo's report-variant bytes from storage.
 import { getOrganisation } from "@/db/queries/organisations";
 import { listPhotos } from "@/db/queries/photos";
-import { getInspectionForRender, listSignatures } from "@/db/queries/signing";
+import { getInspectionSummary, listSignatures } from "@/db/queries/signing";
 import { getVessel } from "@/db/queries/vessels";
 import type { TActor } from "@/lib/auth/actor";
 import { authorizeInspection } from "@/lib/auth/authorize";
@@ -38,7 +38,7 @@ async function mapLimited<T, R>(items: readonly T[], lanes: number, work: (item:
  * photos' bytes in storage (the HTML preview loads them by URL).
  */
 export async function loadReportData({ orgId, inspectionId, photoBytes = true }: { orgId: string; inspectionId: string; photoBytes?: boolean }): Promise<TReportData> {
-  const row = await getInspectionForRender({ orgId, inspectionId });
+  const row = await getInspectionSummary({ orgId, inspectionId });
   if (!row) throw new AppError("not_found", "No such inspection.");
   const vessel = await getVessel({ orgId, vesselId: row.vesselId });
   if (!vessel) throw new AppError("not_found", "No such inspection.");

@@ -3,6 +3,7 @@ import "server-only";
 // master read the comments and are told by e-mail. A comment never changes the
 // report itself, so a signed report can be commented on.
 import * as q from "@/db/queries/comments";
+import { getInspectionSummary } from "@/db/queries/signing";
 import type { TActor } from "@/lib/auth/actor";
 import { authorizeInspection } from "@/lib/auth/authorize";
 import { serverEnv } from "@/lib/env";
@@ -11,7 +12,6 @@ import { validateInput } from "@/lib/http/route";
 import { sendMail } from "@/lib/mail/mailer";
 import { ZCommentInput } from "@/lib/schemas/comment";
 import { commentNoticeEmail } from "@/templates/email/comment-notice";
-import { readInspectionView } from "./inspections";
 import { VESSEL_READERS } from "./vessels";
 
 export const COMMENTERS = ["superintendent", "admin"] as const;
@@ -27,11 +27,11 @@ export async function addCommentAs(actor: TActor, inspectionId: string, body: un
   const finding = input.findingId ? await q.findingOfInspection({ orgId: auth.orgId, inspectionId, findingId: input.findingId }) : null;
   if (input.findingId && !finding) throw new AppError("bad_request", "Check findingId: it is not a finding of this report.", [{ path: "findingId", message: "is not a finding of this report" }]);
   const row = await q.insertComment({ orgId: auth.orgId, inspectionId, authorId: actor.userId, body: input.body, findingId: finding?.id ?? null });
-  const view = await readInspectionView(actor, inspectionId);
+  const ins = (await getInspectionSummary({ orgId: auth.orgId, inspectionId }))!;
   const crew = await q.listVesselCrewEmails({ orgId: auth.orgId, vesselId: auth.vessel.id });
   if (crew.length) {
     const mail = commentNoticeEmail({
-      author: `${actor.name}${actor.rank ? `, ${actor.rank}` : ""}`, vesselName: view.vessel.name, tankCode: view.tank.code, inspectedOn: view.inspection.inspectedOn,
+      author: `${actor.name}${actor.rank ? `, ${actor.rank}` : ""}`, vesselName: ins.vesselName, tankCode: ins.tankCode, inspectedOn: ins.inspectedOn,
       findingNumber: finding?.number ?? null, body: input.body, url: `${serverEnv().APP_URL}/inspections/${inspectionId}?step=review`,
     });
     // The comment stands even if the notice cannot be sent.

@@ -6,11 +6,15 @@ import * as q from "@/db/queries/intervals";
 import { getVessel } from "@/db/queries/vessels";
 import type { TActor } from "@/lib/auth/actor";
 import { authorizeOrg } from "@/lib/auth/authorize";
+import { rolesInOrg } from "@/lib/auth/roles";
 import { AppError } from "@/lib/errors";
 import { validateInput } from "@/lib/http/route";
 import { ZIntervalsInput } from "@/lib/schemas/intervals";
 
 export const INTERVAL_KEEPERS = ["superintendent", "admin"] as const;
+
+/** Whether this user keeps the company's intervals (the fleet page shows the settings to them only). */
+export const keepsIntervals = (actor: TActor, orgId: string) => rolesInOrg(actor.memberships, orgId).some((r) => (INTERVAL_KEEPERS as readonly string[]).includes(r));
 
 export async function listIntervalsAs(actor: TActor) {
   const { orgId } = await authorizeOrg({ actor, allow: INTERVAL_KEEPERS });

@@ -9,10 +9,11 @@ import { unsafeIssueResetToken } from "@/db/queries/password-reset";
 import { addMembership, createOrgUser, getUserWithMemberships, unsafeGetUserByEmail } from "@/db/queries/users";
 import { hashPassword } from "@/lib/auth/password";
 import * as q from "@/db/queries/shares";
-import { getReportFile } from "@/db/queries/signing";
+import { getInspectionSummary, getReportFile } from "@/db/queries/signing";
 import type { TActor } from "@/lib/auth/actor";
 import { authorizeInspection, authorizeOrg } from "@/lib/auth/authorize";
 import { serverEnv } from "@/lib/env";
+import { reportFileName } from "@/lib/format";
 import { AppError } from "@/lib/errors";
 import { validateInput } from "@/lib/http/route";
 import { sendMail } from "@/lib/mail/mailer";
@@ -20,7 +21,6 @@ import { ZAcknowledgeInput, ZShareInput } from "@/lib/schemas/share";
 import { presignDownload } from "@/lib/storage/s3";
 import { reportSharedEmail, surveyorInvitationEmail } from "@/templates/email/report-shared";
 import { newResetToken, resetLink } from "./password-reset";
-import { readInspectionView } from "./inspections";
 import { VESSEL_READERS } from "./vessels";
 
 /** How long an invitation's "choose your password" link works. */
@@ -63,9 +63,9 @@ export async function listSharesAs(actor: TActor, inspectionId: string) {
 export async function shareReportAs(actor: TActor, inspectionId: string, body: unknown) {
   const auth = await authorizeInspection({ actor, inspectionId, allow: SHARERS });
   const input = validateInput(ZShareInput, body);
-  const view = await readInspectionView(actor, inspectionId);
-  if (view.inspection.status !== "countersigned" && view.inspection.status !== "superseded") {
-    throw new AppError("conflict", `Only a countersigned report can be shared with class; this one is ${view.inspection.status}.`, [{ path: "status", message: view.inspection.status }]);
+  const ins = (await getInspectionSummary({ orgId: auth.orgId, inspectionId }))!;
+  if (ins.status !== "countersigned" && ins.status !== "superseded") {
+    throw new AppError("conflict", `Only a countersigned report can be shared with class; this one is ${ins.status}.`, [{ path: "status", message: ins.status }]);
   }
   if (!(await getReportFile({ orgId: auth.orgId, inspectionId }))) throw new AppError("conflict", "The signed PDF is still being prepared: share it in a minute.");
   let surveyor: { id: string; name: string; email: string } | undefined;
@@ -77,14 +77,14 @@ export async function shareReportAs(actor: TActor, inspectionId: string, body: u
     ({ surveyor, inviteLink } = await inviteSurveyor(actor, auth.orgId, input));
   }
   const row = await q.insertShare({ orgId: auth.orgId, inspectionId, surveyorUserId: surveyor.id, sharedBy: actor.userId });
+  const company = (await getOrganisation({ orgId: auth.orgId }))?.name ?? "";
   if (inviteLink) {
-    const mail = surveyorInvitationEmail({ company: (await getOrganisation({ orgId: auth.orgId }))?.name ?? "", invitedBy: actor.name, name: surveyor.name, link: inviteLink, vesselName: view.vessel.name, tankCode: view.tank.code });
+    const mail = surveyorInvitationEmail({ company, invitedBy: actor.name, name: surveyor.name, link: inviteLink, vesselName: ins.vesselName, tankCode: ins.tankCode });
     await sendMail({ to: surveyor.email, ...mail }).catch((error) => console.error("[tankwright] surveyor invitation e-mail failed", error));
   } else if (row) {
     const env = serverEnv();
     const mail = reportSharedEmail({
-      company: (await getOrganisation({ orgId: auth.orgId }))?.name ?? "",
-      vesselName: view.vessel.name, tankCode: view.tank.code, inspectedOn: view.inspection.inspectedOn, revision: view.inspection.revision,
+      company, vesselName: ins.vesselName, tankCode: ins.tankCode, inspectedOn: ins.inspectedOn, revision: ins.revision,
       url: `${env.APP_URL}/shared`, sharedBy: actor.name,
     });
     // The share stands even if the notice cannot be sent; the surveyor sees it on their list.
@@ -117,7 +117,7 @@ async function ownShare(actor: TActor, shareId: string) {
 /** A short-lived link to a shared report's signed PDF, for its surveyor only. */
 export async function sharedReportUrlAs(actor: TActor, shareId: string) {
   const share = await ownShare(actor, shareId);
-  return presignDownload({ key: share.objectKey, fileName: `TW-${share.vessel}-${share.tank}-rev${share.revision}.pdf`.replace(/[^A-Za-z0-9.-]+/g, "-"), contentType: "application/pdf" });
+  return presignDownload({ key: share.objectKey, fileName: reportFileName({ vesselName: share.vessel, tankCode: share.tank, revision: share.revision }), contentType: "application/pdf" });
 }
 
 export async function acknowledgeShareAs(actor: TActor, shareId: string, body: unknown) {

@@ -10,12 +10,14 @@ import type { TActor } from "@/lib/auth/actor";
 import { authorizeInspection } from "@/lib/auth/authorize";
 import { verifyPassword } from "@/lib/auth/password";
 import { AppError } from "@/lib/errors";
+import { reportFileName } from "@/lib/format";
 import { validateInput } from "@/lib/http/route";
 import { QUEUES, sendJob } from "@/lib/jobs/queue";
 import { ZReturnInput, ZSignInput, type TSignInput } from "@/lib/schemas/signing";
 import { signatureKey } from "@/lib/storage/keys";
 import { deleteObjects, presignDownload, writeObject } from "@/lib/storage/s3";
 import { sniffContentType } from "@/lib/uploads/sniff";
+import { RESENDERS } from "./deliveries";
 import { INSPECTORS, readInspectionView } from "./inspections";
 import { VESSEL_READERS } from "./vessels";
 
@@ -125,10 +127,19 @@ export async function reviseInspectionAs(actor: TActor, inspectionId: string) {
 export async function readSigningStateAs(actor: TActor, inspectionId: string) {
   const auth = await authorizeInspection({ actor, inspectionId, allow: VESSEL_READERS });
   const scope = { orgId: auth.orgId, inspectionId };
-  const [signatures, returnComments, file] = await Promise.all([q.listSignatures(scope), q.listReturnComments(scope), q.getReportFile(scope)]);
-  const [self] = await db().query.inspections.findMany({ where: (t, { and, eq }) => and(eq(t.orgId, auth.orgId), eq(t.id, inspectionId)), columns: { seriesId: true } });
+  const [signatures, returnComments, file, self] = await Promise.all([q.listSignatures(scope), q.listReturnComments(scope), q.getReportFile(scope), q.getInspectionSummary(scope)]);
   const revisions = self ? await q.listRevisions({ orgId: auth.orgId, seriesId: self.seriesId }) : [];
+  const has = (allowed: readonly string[]) => auth.roles.some((r) => allowed.includes(r));
+  const officer = signatures.find((s) => s.kind === "officer");
+  const awaitingMaster = self?.status === "submitted" && has(COUNTERSIGNERS) && officer?.userId !== actor.userId;
   return {
+    /** The next steps this user may take, by the same rules the routes enforce. */
+    may: {
+      countersign: awaitingMaster,
+      returnIt: awaitingMaster,
+      revise: self?.status === "countersigned" && has(INSPECTORS) && revisions.at(-1)?.id === inspectionId,
+      resend: has(RESENDERS),
+    },
     signatures: signatures.map((s) => ({ kind: s.kind, signerName: s.signerName, signerRank: s.signerRank, typedSignature: s.typedSignature, drawn: Boolean(s.drawnSignatureKey), signedAt: s.signedAt, userId: s.userId })),
     returnComments,
     report: file ? { sha256: file.sha256, sizeBytes: file.sizeBytes, createdAt: file.createdAt } : null,
@@ -141,7 +152,7 @@ export type TSigningState = Awaited<ReturnType<typeof readSigningStateAs>>;
 /** A short-lived link to the signed PDF of a countersigned revision. */
 export async function signedReportUrlAs(actor: TActor, inspectionId: string) {
   const auth = await authorizeInspection({ actor, inspectionId, allow: VESSEL_READERS });
-  const file = await q.getReportFile({ orgId: auth.orgId, inspectionId });
-  if (!file) throw new AppError("not_found", "There is no signed PDF of this inspection yet: it is made once the master countersigns, within a minute.");
-  return presignDownload({ key: file.objectKey, fileName: file.objectKey.split("/").pop(), contentType: "application/pdf" });
+  const [file, ins] = await Promise.all([q.getReportFile({ orgId: auth.orgId, inspectionId }), q.getInspectionSummary({ orgId: auth.orgId, inspectionId })]);
+  if (!file || !ins) throw new AppError("not_found", "There is no signed PDF of this inspection yet: it is made once the master countersigns, within a minute.");
+  return presignDownload({ key: file.objectKey, fileName: reportFileName({ vesselName: ins.vesselName, tankCode: ins.tankCode, revision: ins.revision }), contentType: "application/pdf" });
 }

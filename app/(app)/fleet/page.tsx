@@ -13,7 +13,7 @@ import { listVessels } from "@/db/queries/vessels";
 import { pageActor, pageAuthorize } from "@/lib/auth/page";
 import type { TFleetQuery } from "@/lib/schemas/fleet";
 import { authorizeFleetQuery, getFleetOverviewAs, resolveFleetScope } from "@/lib/services/fleet";
-import { INTERVAL_KEEPERS, listIntervalsAs } from "@/lib/services/intervals";
+import { keepsIntervals, listIntervalsAs } from "@/lib/services/intervals";
 
 export const metadata: Metadata = { title: "Fleet" };
 
@@ -61,8 +61,7 @@ export default async function FleetPage({ searchParams }: { searchParams: Promis
   const overview = await getFleetOverviewAs(actor, q);
   const scopeName = q.vessel ? overview.vessels.find((v) => v.id === q.vessel)?.name : undefined;
   const showVesselList = !q.vessel && overview.vessels.length > 1;
-  const keepsIntervals = actor.memberships.some((m) => m.orgId === overview.orgId && (INTERVAL_KEEPERS as readonly string[]).includes(m.role));
-  const intervals = keepsIntervals ? await listIntervalsAs(actor) : null;
+  const intervals = keepsIntervals(actor, overview.orgId) ? await listIntervalsAs(actor) : null;
   return (
     <>
       <PageHeader

@@ -21,7 +21,7 @@ export default async function InspectionPage({ params, searchParams }: { params:
     <div className="space-y-4">
       <SigningPanel
         inspectionId={inspectionId} status={view.inspection.status} revision={view.inspection.revision}
-        state={JSON.parse(JSON.stringify(signing))} actor={{ userId: actor.userId, name: actor.name }}
+        state={JSON.parse(JSON.stringify(signing))} actor={{ name: actor.name }}
       />
       <InspectionWizard key={`${view.inspection.status}-${view.inspection.revision}`} initial={JSON.parse(JSON.stringify(view))} step={first} signerName={canInspect(signing.roles) ? actor.name : undefined} />
       <CommentsPanel inspectionId={inspectionId} findings={view.findings.map((f) => ({ id: f.id, number: f.number, label: `${FINDING_TYPE_LABELS[f.type]}, ${formatFrames(f.frameFrom, f.frameTo)}` }))} />
