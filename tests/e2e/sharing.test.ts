@@ -1,16 +1,14 @@
 // Sharing with class in Chromium: the superintendent shares a countersigned
 // report and comments on it; the surveyor opens it from "Reports shared with
 // you" and acknowledges it; the superintendent sees the acknowledgement.
-import { createHash } from "node:crypto";
 import path from "node:path";
-import { eq } from "drizzle-orm";
 import type { Browser } from "playwright-core";
 import { afterAll, beforeAll, describe, expect, it } from "vitest";
-import { inspections, reportFiles } from "@/db/schema";
 import { fillInspection } from "@/db/seed/complete-inspection";
 import { launchBrowser } from "../fixtures/browser";
 import { testEnv } from "../fixtures/env";
 import { buildScenario, PASSWORD, testDb, type TScenario } from "../fixtures/scenario";
+import { storeSignedReport } from "../fixtures/signed-report";
 import { signedInTabletPage } from "./pages/sign-in-page";
 
 const ARTIFACTS = path.join(import.meta.dirname, "..", "artifacts");
@@ -23,11 +21,7 @@ beforeAll(async () => {
   s = await buildScenario();
   inspectionId = s.inspectionOf(s.ownVessel.id);
   await fillInspection(testDb(), { orgId: s.org.id, inspectionId, frameFrom: s.tankOf(s.ownVessel.id).frameFrom, testedAt: new Date("2026-11-20T08:00:00Z"), measuredBy: "T", standbyPerson: "T" });
-  await testDb().update(inspections).set({ status: "countersigned", countersignedAt: new Date(), lockedAt: new Date() }).where(eq(inspections.id, inspectionId));
-  const { writeObject } = await import("@/lib/storage/s3");
-  const objectKey = `org/${s.org.id}/vessel/${s.ownVessel.id}/inspection/${inspectionId}/report/revision-1-e2e.pdf`;
-  await writeObject({ key: objectKey, body: pdf, contentType: "application/pdf" });
-  await testDb().insert(reportFiles).values({ orgId: s.org.id, inspectionId, objectKey, sha256: createHash("sha256").update(pdf).digest("hex"), sizeBytes: pdf.length });
+  await storeSignedReport({ orgId: s.org.id, vesselId: s.ownVessel.id, inspectionId, pdf, label: "e2e" });
   browser = await launchBrowser();
 });
 afterAll(async () => {

@@ -2,12 +2,13 @@
 // S3 store and the mail catcher, with its settings changed per case: a PDF over
 // the attachment limit goes out as a link that expires; an SMTP service that
 // cannot be reached leaves the delivery failed with its error, for the retry.
-import { createHash, randomUUID } from "node:crypto";
+import { randomUUID } from "node:crypto";
 import { eq } from "drizzle-orm";
 import { afterEach, beforeAll, describe, expect, it, vi } from "vitest";
-import { emailDeliveries, inspections, reportFiles } from "@/db/schema";
+import { emailDeliveries } from "@/db/schema";
 import { waitForMail } from "../fixtures/mail";
 import { buildScenario, testDb, type TScenario } from "../fixtures/scenario";
+import { storeSignedReport } from "../fixtures/signed-report";
 
 let s: TScenario;
 let reportFileId = "";
@@ -29,12 +30,7 @@ async function delivery(recipient: string) {
 beforeAll(async () => {
   s = await buildScenario();
   const inspectionId = s.inspectionOf(s.ownVessel.id);
-  await testDb().update(inspections).set({ status: "countersigned", countersignedAt: new Date(), lockedAt: new Date() }).where(eq(inspections.id, inspectionId));
-  const { writeObject } = await import("@/lib/storage/s3");
-  const objectKey = `org/${s.org.id}/vessel/${s.ownVessel.id}/inspection/${inspectionId}/report/revision-1-test.pdf`;
-  await writeObject({ key: objectKey, body: pdf, contentType: "application/pdf" });
-  const [file] = await testDb().insert(reportFiles).values({ orgId: s.org.id, inspectionId, objectKey, sha256: createHash("sha256").update(pdf).digest("hex"), sizeBytes: pdf.length }).returning();
-  reportFileId = file!.id;
+  reportFileId = (await storeSignedReport({ orgId: s.org.id, vesselId: s.ownVessel.id, inspectionId, pdf, label: "test" })).id;
 });
 afterEach(() => {
   process.env = { ...saved };

@@ -4,10 +4,11 @@
 import { createHash } from "node:crypto";
 import { eq } from "drizzle-orm";
 import { beforeAll, describe, expect, it } from "vitest";
-import { inspections, memberships, reportFiles, reportShares, users } from "@/db/schema";
+import { inspections, memberships, reportShares, users } from "@/db/schema";
 import { anonymousClient, signIn, trySignIn, type TClient } from "../fixtures/http";
 import { waitForMail } from "../fixtures/mail";
 import { buildScenario, PASSWORD, testDb, type TScenario } from "../fixtures/scenario";
+import { storeSignedReport } from "../fixtures/signed-report";
 
 let s: TScenario;
 let superintendent: TClient;
@@ -22,11 +23,7 @@ type TMine = { shares: { shareId: string; vessel: string; sha256: string | null;
 
 /** A countersigned inspection with its signed PDF in storage, as the rendering job leaves it. */
 async function countersigned(inspectionId: string, vesselId: string, label: string) {
-  await testDb().update(inspections).set({ status: "countersigned", countersignedAt: new Date(), lockedAt: new Date() }).where(eq(inspections.id, inspectionId));
-  const { writeObject } = await import("@/lib/storage/s3");
-  const objectKey = `org/${s.org.id}/vessel/${vesselId}/inspection/${inspectionId}/report/revision-1-${label}.pdf`;
-  await writeObject({ key: objectKey, body: pdfOf(label), contentType: "application/pdf" });
-  await testDb().insert(reportFiles).values({ orgId: s.org.id, inspectionId, objectKey, sha256: createHash("sha256").update(pdfOf(label)).digest("hex"), sizeBytes: pdfOf(label).length });
+  await storeSignedReport({ orgId: s.org.id, vesselId, inspectionId, pdf: pdfOf(label), label });
 }
 
 beforeAll(async () => {
