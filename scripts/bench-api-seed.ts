@@ -33,6 +33,7 @@ import {
 import { hashPassword } from "@/lib/auth/password";
 import { gatherWorkItems, type TWorkSource, type TWorkSourceFinding } from "@/lib/office/work-list";
 import { COATING_AREAS, FINDING_STATUSES, FINDING_TYPES, MEMBER_KINDS, REPAIR_KINDS, TANK_KINDS, TANK_SIDES, VESSEL_TYPES } from "@/lib/vocabulary";
+import { prng } from "./prng";
 
 const BENCH_EMAIL = "bench.super@tankwright.test";
 const BENCH_PASSWORD = "bench-password-0123";
@@ -48,17 +49,6 @@ const url = process.env.DATABASE_URL;
 if (!url) throw new Error("DATABASE_URL is not set");
 const db = createDb(url, 4);
 
-/** Seeded PRNG (mulberry32): every run seeds the same fleet. */
-function prng(seed: number): () => number {
-  let a = seed >>> 0;
-  return () => {
-    a = (a + 0x6d2b79f5) >>> 0;
-    let t = a;
-    t = Math.imul(t ^ (t >>> 15), t | 1);
-    t ^= t + Math.imul(t ^ (t >>> 7), t | 61);
-    return ((t ^ (t >>> 14)) >>> 0) / 4294967296;
-  };
-}
 const rand = prng(7);
 const pick = <T>(xs: readonly T[]): T => xs[Math.floor(rand() * xs.length)]!;
 const round = (x: number, digits = 1) => Math.round(x * 10 ** digits) / 10 ** digits;

@@ -35,6 +35,7 @@ import { MB } from "@/lib/uploads/limits";
 import { COATING_AREAS, FINDING_TYPES, type TFindingType, type TMemberKind, type TPlatingRegion } from "@/lib/vocabulary";
 import { registerPdfFonts } from "@/templates/fonts";
 import { ReportDocument } from "@/templates/report";
+import { prng } from "./prng";
 
 const FINDINGS = 80;
 const PHOTOS = 60;
@@ -48,17 +49,6 @@ const CHROMIUM_ARGS = ["--headless", "--no-sandbox", "--disable-gpu", "--disable
 
 // ---- Photos (child process) --------------------------------------------------
 
-/** A seeded PRNG (mulberry32): every run makes the same photos. */
-function prng(seed: number): () => number {
-  let a = seed >>> 0;
-  return () => {
-    a = (a + 0x6d2b79f5) >>> 0;
-    let t = a;
-    t = Math.imul(t ^ (t >>> 15), t | 1);
-    t ^= t + Math.imul(t ^ (t >>> 7), t | 61);
-    return ((t ^ (t >>> 14)) >>> 0) / 4294967296;
-  };
-}
 
 /** A 12-megapixel JPEG with colour, structure and grain, like a tank photo; then its report variant. */
 async function makeReportVariant(index: number, grain: Buffer): Promise<Buffer> {

@@ -19,6 +19,7 @@ import { fileURLToPath } from "node:url";
 import sharp from "sharp";
 import { makeVariants } from "@/lib/photos/image";
 import { REPORT_TARGET_BYTES } from "@/lib/uploads/limits";
+import { prng } from "./prng";
 
 const WIDTH = 4000;
 const HEIGHT = 3000;
@@ -44,17 +45,6 @@ function parseCounts(): number[] {
 
 // ---- Test photos -------------------------------------------------------------
 
-/** A small seeded PRNG (mulberry32), so each photo differs and every run makes the same set. */
-function prng(seed: number): () => number {
-  let a = seed >>> 0;
-  return () => {
-    a = (a + 0x6d2b79f5) >>> 0;
-    let t = a;
-    t = Math.imul(t ^ (t >>> 15), t | 1);
-    t ^= t + Math.imul(t ^ (t >>> 7), t | 61);
-    return ((t ^ (t >>> 14)) >>> 0) / 4294967296;
-  };
-}
 
 /**
  * Surface texture and sensor grain, made once and laid over every photo (flipped
