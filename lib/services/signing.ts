@@ -18,7 +18,7 @@ import { signatureKey } from "@/lib/storage/keys";
 import { deleteObjects, presignDownload, writeObject } from "@/lib/storage/s3";
 import { sniffContentType } from "@/lib/uploads/sniff";
 import { RESENDERS } from "./deliveries";
-import { INSPECTORS, readInspectionView } from "./inspections";
+import { buildView, INSPECTORS } from "./inspections";
 import { VESSEL_READERS } from "./vessels";
 
 /** Only the vessel's master countersigns or returns a report. */
@@ -34,8 +34,8 @@ async function confirmPassword(actor: TActor, password: string) {
 }
 
 /** Everything that must hold before a report can be signed: no blockers, and the version the signer read. */
-async function readForSigning(actor: TActor, inspectionId: string, version: number) {
-  const view = await readInspectionView(actor, inspectionId);
+async function readForSigning(auth: Awaited<ReturnType<typeof authorizeInspection>>, inspectionId: string, version: number) {
+  const view = await buildView(auth.orgId, inspectionId, auth.vessel, true);
   if (view.blockers.length) {
     throw new AppError("unprocessable", `The report cannot be signed yet: ${view.blockers.length} thing${view.blockers.length > 1 ? "s are" : " is"} missing.`,
       view.blockers.map((b) => ({ path: `${b.step}.${b.field}`, message: b.message })));
@@ -62,7 +62,7 @@ async function sign(actor: TActor, inspectionId: string, body: unknown, kind: "o
   const auth = await authorizeInspection({ actor, inspectionId, allow: kind === "officer" ? INSPECTORS : COUNTERSIGNERS });
   const input = validateInput(ZSignInput, body);
   await confirmPassword(actor, input.password);
-  const view = await readForSigning(actor, inspectionId, input.version);
+  const view = await readForSigning(auth, inspectionId, input.version);
   if (kind === "master") {
     const officer = (await q.listSignatures({ orgId: auth.orgId, inspectionId })).find((s) => s.kind === "officer");
     if (officer?.userId === actor.userId) {
