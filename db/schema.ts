@@ -535,6 +535,36 @@ export const coatingAreas = pgTable(
   ],
 );
 
+/**
+ * Each tank's latest countersigned inspection (by inspection date, then
+ * revision) and the coating rank of its worst area under both readings of the
+ * 20 % boundary (0 GOOD, 1 FAIR, 2 POOR, null without a coating record).
+ * Kept by database triggers on inspections and coating_areas (migration
+ * 0004_tank-latest), so every write path keeps it true; the fleet overview and
+ * the work list read it instead of searching every tank's inspections per request.
+ */
+export const tankLatestInspections = pgTable(
+  "tank_latest_inspections",
+  {
+    tankId: uuid("tank_id")
+      .primaryKey()
+      .references(() => tanks.id, { onDelete: "cascade" }),
+    orgId: uuid("org_id").notNull().references(() => organisations.id, { onDelete: "cascade" }),
+    vesselId: uuid("vessel_id").notNull().references(() => vessels.id, { onDelete: "cascade" }),
+    inspectionId: uuid("inspection_id")
+      .notNull()
+      .references(() => inspections.id, { onDelete: "cascade" }),
+    inspectedOn: date("inspected_on").notNull(),
+    revision: integer("revision").notNull(),
+    /** The tank's rank with the 20 % boundary read as in the table (> 20 % is POOR). */
+    rankTable: integer("rank_table"),
+    /** The tank's rank with the 20 % boundary read as in the wording (20 % is POOR). */
+    rankWording: integer("rank_wording"),
+    updatedAt: timestamp("updated_at", { withTimezone: true }).notNull().defaultNow(),
+  },
+  (t) => [index("tank_latest_org_vessel_idx").on(t.orgId, t.vesselId), index("tank_latest_inspection_idx").on(t.inspectionId)],
+);
+
 export const anodeRecords = pgTable("anode_records", {
   id: uuid("id").primaryKey().defaultRandom(),
   orgId: uuid("org_id").notNull().references(() => organisations.id, { onDelete: "cascade" }),

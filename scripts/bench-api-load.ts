@@ -8,10 +8,12 @@
 //
 //   BENCH_API_IDS        JSON from scripts/bench-api-seed.ts (orgId, vesselId, tankId, dockingId, email, password)
 //   BENCH_API_BASE_URL   the running app, e.g. http://127.0.0.1:3900
-//   DATABASE_URL         the benchmark's database (for EXPLAIN)
+//   DATABASE_URL         the benchmark's database (to switch auto_explain on and off)
+//   BENCH_API_PG_LOG     the benchmark cluster's log file, where auto_explain writes
 //   BENCH_API_SECONDS    seconds per run (default 10)
 //   BENCH_API_CONNECTIONS  e.g. 1,10,50 (the default)
 import { createRequire } from "node:module";
+import { open, stat } from "node:fs/promises";
 import { performance } from "node:perf_hooks";
 import pg from "pg";
 
@@ -112,113 +114,62 @@ function table(head: string[], rows: string[][]) {
   for (const r of rows) console.log(line(r));
 }
 
-// ---- The queries behind each endpoint, as the app sends them ------------------
+// ---- The plans of the queries the app really ran ------------------------------
+// The benchmark's cluster loads auto_explain switched off (log_min_duration -1).
+// For a few sequential requests to one endpoint it is switched on for every
+// statement, with ANALYZE and BUFFERS; the plans are read back from the
+// cluster's log. No copy of the app's SQL is kept here to drift from db/queries.
 
-type TQuery = { name: string; text: string; values: unknown[] };
-const { orgId, vesselId, tankId, dockingId } = ids;
+type TPlanNode = Record<string, unknown> & { "Node Type": string; Plans?: TPlanNode[] };
+type TLoggedPlan = { ms: number; text: string; plan: string[] };
 
-const areaRank = `case
-    when greatest(ca.breakdown_pct, ca.rusted_pct) > 20 or (false and greatest(ca.breakdown_pct, ca.rusted_pct) >= 20)
-      or ca.hard_scale_pct >= 10 or coalesce(ca.edges_rusted_pct, 0) > 50 then 2
-    when greatest(ca.breakdown_pct, ca.rusted_pct) >= 3 or ca.hard_scale_pct > 0 or coalesce(ca.edges_rusted_pct, 0) >= 20 then 1
-    else 0 end`;
-const datedTanks = `with scoped as (
-      select t.id as tank_id, t.vessel_id, t.code, t.name as tank_name, t.kind, t.side, t.coating_system, t.sort_order,
-             v.name as vessel_name, v.vessel_type, li.id as inspection_id, li.inspected_on, li.revision,
-             iv.default_months, iv.below_good_months, cr.rating_rank
-      from tanks t
-      join vessels v on v.id = t.vessel_id and v.org_id = $1::uuid
-      left join lateral (
-        select i.id, i.inspected_on, i.revision from inspections i
-        where i.org_id = $1::uuid and i.tank_id = t.id and i.status = 'countersigned'
-        order by i.inspected_on desc, i.revision desc limit 1
-      ) li on true
-      left join lateral (
-        select ii.default_months, ii.below_good_months from inspection_intervals ii
-        where ii.org_id = $1::uuid and (ii.vessel_id = t.vessel_id or ii.vessel_id is null)
-        order by ii.vessel_id nulls last limit 1
-      ) iv on true
-      left join lateral (
-        select max(${areaRank}) as rating_rank from coating_areas ca where ca.org_id = $1::uuid and ca.inspection_id = li.id
-      ) cr on true
-      where t.org_id = $1::uuid
-    ), dated as (
-      select s.*, case
-          when s.inspection_id is null or s.default_months is null then null
-          when s.rating_rank = 0 then (s.inspected_on + make_interval(months => s.default_months))::date
-          else (s.inspected_on + make_interval(months => least(s.below_good_months, s.default_months)))::date
-        end as due_on
-      from scoped s
-    )`;
+/** One plan node per line, indented as EXPLAIN's text format indents them. */
+function planLines(node: TPlanNode, depth = 0): string[] {
+  const n = (k: string) => node[k] as string | number | undefined;
+  const on = [n("Relation Name") && `on ${n("Relation Name")}`, n("Index Name") && `using ${n("Index Name")}`].filter(Boolean).join(" ");
+  const cond = n("Index Cond") ?? n("Hash Cond") ?? n("Recheck Cond") ?? n("Filter");
+  const sortKey = node["Sort Key"] ? ` key ${(node["Sort Key"] as string[]).join(", ")}` : "";
+  const line = `${"  ".repeat(depth)}${depth ? "-> " : ""}${n("Node Type")}${on ? ` ${on}` : ""}${sortKey} (actual ${n("Actual Total Time")} ms, rows ${n("Actual Rows")}, loops ${n("Actual Loops")}, shared hit ${n("Shared Hit Blocks") ?? 0} read ${n("Shared Read Blocks") ?? 0})${cond ? `  ${cond}` : ""}`;
+  return [line, ...(node.Plans ?? []).flatMap((c) => planLines(c, depth + 1))];
+}
 
-async function queriesFor(client: pg.Client, endpoint: TEndpoint): Promise<TQuery[]> {
-  const today = new Date().toISOString().slice(0, 10);
-  if (endpoint.path === "/api/v1/fleet" || endpoint.path === "/fleet") {
-    const page = await client.query(
-      `${datedTanks} select inspection_id from dated order by vessel_name, vessel_id, sort_order, code, tank_id limit 50 offset 0`,
-      [orgId],
-    );
-    const inspectionIds = page.rows.flatMap((r: { inspection_id: string | null }) => (r.inspection_id ? [r.inspection_id] : []));
-    return [
-      {
-        name: "listFleetTanks (db/queries/fleet.ts), first page of 50",
-        text: `${datedTanks}
-    select tank_id, vessel_id, vessel_name, vessel_type, code, tank_name, kind, side, coating_system,
-           inspection_id, to_char(inspected_on, 'YYYY-MM-DD') as inspected_on, revision,
-           default_months, below_good_months, rating_rank, to_char(due_on, 'YYYY-MM-DD') as due_on
-    from dated where true
-    order by vessel_name, vessel_id, sort_order, code, tank_id limit 50 offset 0`,
-        values: [orgId],
-      },
-      {
-        name: "countFleetTanks (db/queries/fleet.ts)",
-        text: `${datedTanks}
-    select count(*)::int as tanks,
-           count(*) filter (where due_on < $2::date)::int as overdue,
-           count(*) filter (where due_on >= $2::date and due_on <= $2::date + 30)::int as due_soon,
-           count(*) filter (where rating_rank = 2)::int as poor,
-           count(*) filter (where rating_rank = 1)::int as fair,
-           count(*) filter (where rating_rank = 0)::int as good,
-           count(*) filter (where inspection_id is not null and rating_rank is null)::int as unrated,
-           count(*) filter (where inspection_id is null)::int as never_inspected,
-           count(*) filter (where true)::int as matching
-    from dated`,
-        values: [orgId, today],
-      },
-      {
-        name: "listCoatingForInspections (db/queries/fleet.ts), one page",
-        text: `select inspection_id, area, breakdown_pct, rusted_pct, hard_scale_pct, edges_rusted_pct from coating_areas
-    where org_id = $1 and inspection_id = any($2::uuid[])`,
-        values: [orgId, inspectionIds],
-      },
-    ];
+/** auto_explain's JSON entries in the cluster's log (each continuation line starts with a tab). */
+function parsePlans(log: string): TLoggedPlan[] {
+  const plans: TLoggedPlan[] = [];
+  const lines = log.split("\n");
+  for (let i = 0; i < lines.length; i++) {
+    const head = / LOG:  duration: ([\d.]+) ms  plan:$/.exec(lines[i]!);
+    if (!head) continue;
+    const json: string[] = [];
+    while (i + 1 < lines.length && lines[i + 1]!.startsWith("\t")) json.push(lines[++i]!.slice(1));
+    const entry = JSON.parse(json.join("\n")) as { "Query Text": string; Plan: TPlanNode };
+    plans.push({ ms: Number(head[1]), text: entry["Query Text"], plan: planLines(entry.Plan) });
   }
-  if (endpoint.path.includes("/history")) {
-    const ins = await client.query(`select id from inspections where org_id = $1 and vessel_id = $2 and tank_id = $3`, [orgId, vesselId, tankId]);
-    const inspectionIds = ins.rows.map((r: { id: string }) => r.id);
-    return [
-      { name: "listTankInspections (db/queries/history.ts)", text: `select * from inspections where org_id = $1 and vessel_id = $2 and tank_id = $3 order by inspected_on, revision`, values: [orgId, vesselId, tankId] },
-      { name: "findings of the tank's inspections (db/queries/history.ts)", text: `select * from findings where org_id = $1 and inspection_id = any($2::uuid[])`, values: [orgId, inspectionIds] },
-      { name: "coating areas of the tank's inspections (db/queries/history.ts)", text: `select * from coating_areas where org_id = $1 and inspection_id = any($2::uuid[])`, values: [orgId, inspectionIds] },
-    ];
+  return plans;
+}
+
+async function explainEndpoint(endpoint: TEndpoint, cookie: string, requests: number): Promise<TLoggedPlan[]> {
+  const logPath = process.env.BENCH_API_PG_LOG;
+  if (!logPath) throw new Error("BENCH_API_PG_LOG is not set (run npm run bench:api)");
+  const client = new pg.Client({ connectionString: databaseUrl });
+  await client.connect();
+  const from = (await stat(logPath)).size;
+  try {
+    await client.query("alter system set auto_explain.log_min_duration = 0");
+    await client.query("select pg_reload_conf()");
+    await new Promise((r) => setTimeout(r, 500)); // every backend reads the new setting
+    for (let i = 0; i < requests; i++) await check(endpoint.path, cookie);
+  } finally {
+    await client.query("alter system reset auto_explain.log_min_duration");
+    await client.query("select pg_reload_conf()");
+    await client.end();
   }
-  const latest = `select distinct on (i.tank_id) i.id, i.tank_id, t.code, i.inspected_on
-    from inspections i inner join tanks t on t.org_id = i.org_id and t.id = i.tank_id
-    where i.org_id = $1 and i.vessel_id = $2 and i.status = 'countersigned'
-    order by i.tank_id, i.inspected_on desc, i.revision desc, i.countersigned_at desc`;
-  const sources = await client.query(latest, [orgId, vesselId]);
-  const inspectionIds = sources.rows.map((r: { id: string }) => r.id);
-  return [
-    { name: "listWorkSources, latest inspection per tank (db/queries/dockings.ts)", text: latest, values: [orgId, vesselId] },
-    { name: "listWorkSources, findings of those inspections (db/queries/dockings.ts)", text: `select * from findings where org_id = $1 and inspection_id = any($2::uuid[])`, values: [orgId, inspectionIds] },
-    {
-      name: "listDockingItems (db/queries/dockings.ts)",
-      text: `select di.id, di.tank_id, t.code, di.finding_id, di.kind, di.description, di.quantity, di.unit, di.adjusted_quantity, di.included, di.adjustment_reason, di.done_at
-    from docking_items di left join tanks t on t.org_id = di.org_id and t.id = di.tank_id
-    where di.org_id = $1 and di.docking_id = $2 order by t.code, di.kind, di.description`,
-      values: [orgId, dockingId],
-    },
-  ];
+  const handle = await open(logPath, "r");
+  const { size } = await handle.stat();
+  const buffer = Buffer.alloc(size - from);
+  await handle.read(buffer, 0, buffer.length, from);
+  await handle.close();
+  return parsePlans(buffer.toString("utf8")).filter((p) => !/pg_reload_conf|auto_explain/.test(p.text));
 }
 
 // ---- Run -----------------------------------------------------------------------
@@ -273,24 +224,27 @@ for (const r of rows.filter((r) => r.endpoint.budget && r.connections === BUDGET
 // The slowest endpoint at the highest connection count, and the slowest of the queries behind it.
 const top = Math.max(...connectionCounts);
 const slowest = rows.filter((r) => r.connections === top).sort((a, b) => b.p95 - a.p95)[0]!;
-const client = new pg.Client({ connectionString: databaseUrl });
-await client.connect();
-const explained: { q: TQuery; plan: string[]; ms: number }[] = [];
-for (const q of await queriesFor(client, slowest.endpoint)) {
-  await client.query({ text: q.text, values: q.values }); // warm the cache as the load did
-  const res = await client.query({ text: `explain (analyze, buffers) ${q.text}`, values: q.values });
-  const plan = res.rows.map((r: Record<string, string>) => r["QUERY PLAN"]!);
-  const time = Number(/Execution Time: ([\d.]+) ms/.exec(plan.join("\n"))?.[1] ?? NaN);
-  explained.push({ q, plan, ms: time });
+const EXPLAIN_REQUESTS = 5;
+const logged = await explainEndpoint(slowest.endpoint, cookie, EXPLAIN_REQUESTS);
+// The same statement from each request: its median execution time.
+const byText = new Map<string, TLoggedPlan[]>();
+for (const p of logged) byText.set(p.text, [...(byText.get(p.text) ?? []), p]);
+const statements = [...byText.values()]
+  .map((runs) => {
+    const sorted = [...runs].sort((a, b) => a.ms - b.ms);
+    return { text: runs[0]!.text, runs: runs.length, median: sorted[Math.floor(sorted.length / 2)]!.ms, plan: sorted[Math.floor(sorted.length / 2)]!.plan };
+  })
+  .sort((a, b) => b.median - a.median);
+console.log("");
+console.log(`Slowest endpoint at ${top} connections: ${slowest.endpoint.name} (p95 ${ms(slowest.p95)} ms). Statements it ran in ${EXPLAIN_REQUESTS} sequential requests (auto_explain, median execution time):`);
+for (const st of statements) console.log(`  ${st.median.toFixed(3).padStart(8)} ms  × ${st.runs}  ${st.text.replace(/\s+/g, " ").slice(0, 110)}`);
+const worst = statements[0];
+if (worst) {
+  console.log("");
+  console.log("EXPLAIN (ANALYZE, BUFFERS) of the slowest, as the app ran it:");
+  console.log(worst.text.replace(/^/gm, "  "));
+  console.log("");
+  for (const line of worst.plan) console.log(`  ${line}`);
+} else {
+  console.log("  (no plans were logged: is auto_explain loaded? see the cluster log)");
 }
-await client.end();
-explained.sort((a, b) => b.ms - a.ms);
-console.log("");
-console.log(`Slowest endpoint at ${top} connections: ${slowest.endpoint.name} (p95 ${ms(slowest.p95)} ms). Execution time of the queries behind it:`);
-for (const e of explained) console.log(`  ${ms(e.ms).padStart(8)} ms  ${e.q.name}`);
-const worst = explained[0]!;
-console.log("");
-console.log(`EXPLAIN (ANALYZE, BUFFERS) of ${worst.q.name}:`);
-console.log(worst.q.text.replace(/^/gm, "  "));
-console.log("");
-for (const line of worst.plan) console.log(`  ${line}`);

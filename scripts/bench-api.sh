@@ -31,7 +31,11 @@ cd "$ROOT"
 ensure_node_modules
 require_free_port "$APP_PORT" TANKWRIGHT_BENCH_APP_PORT
 # fsync off: this cluster holds only throwaway benchmark data.
-ensure_cluster "$PG_DATA" "$PG_PORT" "-c fsync=off -c synchronous_commit=off -c full_page_writes=off"
+# auto_explain is loaded switched off; scripts/bench-api-load.ts switches it on for a
+# few requests after the load to log the plans of the queries the app really ran.
+ensure_cluster "$PG_DATA" "$PG_PORT" "-c fsync=off -c synchronous_commit=off -c full_page_writes=off \
+  -c shared_preload_libraries=auto_explain -c auto_explain.log_min_duration=-1 -c auto_explain.log_analyze=on \
+  -c auto_explain.log_buffers=on -c auto_explain.log_format=json"
 recreate_database "$PG_PORT" tankwright_bench
 export DATABASE_URL="postgres://postgres@127.0.0.1:$PG_PORT/tankwright_bench"
 export AUTH_SECRET="bench-secret-for-throwaway-databases-only-0123456789"
@@ -60,4 +64,4 @@ log "starting the app on $APP_URL"
 NODE_ENV=production NODE_OPTIONS="${NODE_OPTIONS:-$APP_NODE_OPTIONS}" start_bg node_modules/.bin/next start -H 127.0.0.1 -p "$APP_PORT" >"$LOGS/app.log" 2>&1; APP_PID=$BG_PID
 wait_for_http "$APP_URL/sign-in" 90 || { tail -40 "$LOGS/app.log"; die "the app did not start"; }
 
-BENCH_API_IDS="$IDS" BENCH_API_BASE_URL="$APP_URL" npx tsx scripts/bench-api-load.ts "$@"
+BENCH_API_IDS="$IDS" BENCH_API_BASE_URL="$APP_URL" BENCH_API_PG_LOG="$PG_DATA.log" npx tsx scripts/bench-api-load.ts "$@"

@@ -34,7 +34,7 @@ type TDraft = { included: boolean; adjustedQuantity: string; adjustmentReason: s
 const quantityText = (q: number) => new Intl.NumberFormat("en", { maximumFractionDigits: 3 }).format(q);
 
 /** The priced work list; the office includes, excludes or adjusts items with a reason. Costs come from the server. */
-export function WorkListEditor({ dockingId, locked, inProgress, initial }: { dockingId: string; locked: boolean; inProgress: boolean; initial: TWorkListView }) {
+export function WorkListEditor({ dockingId, viewQuery, itemsNote, locked, inProgress, initial }: { dockingId: string; viewQuery: string; itemsNote: string | null; locked: boolean; inProgress: boolean; initial: TWorkListView }) {
   const [list, setList] = useState(initial);
   const [editing, setEditing] = useState<string | null>(null);
   const [draft, setDraft] = useState<TDraft>({ included: true, adjustedQuantity: "", adjustmentReason: "" });
@@ -46,7 +46,8 @@ export function WorkListEditor({ dockingId, locked, inProgress, initial }: { doc
     setBusy(true);
     setMessage(null);
     try {
-      const res = await fetch(url, init);
+      // The answer carries the page of items being shown (the totals cover every item).
+      const res = await fetch(viewQuery ? `${url}?${viewQuery}` : url, init);
       const body = (await res.json().catch(() => ({}))) as TErrorBody & { workList?: Omit<TWorkListView, "items"> & { items: (Omit<TWorkListItemView, "done"> & { doneAt: string | null })[] } };
       if (!res.ok || !body.workList) {
         const issue = body.error?.issues?.[0];
@@ -89,6 +90,7 @@ export function WorkListEditor({ dockingId, locked, inProgress, initial }: { doc
           </Button>
         )}
       </div>
+      {itemsNote ? <p className="text-sm text-slate-700">{itemsNote}</p> : null}
       {list.items.length ? (
         <Table head={["Tank", "Work", "Qty", "Unit rate", "Cost", ""]} caption="Work list items">
           {list.items.map((i) => (

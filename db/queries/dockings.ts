@@ -1,7 +1,7 @@
 import "server-only";
-import { and, asc, desc, eq, inArray } from "drizzle-orm";
+import { and, asc, desc, eq, inArray, sql } from "drizzle-orm";
 import { db } from "@/db";
-import { anodeRecords, dockingItems, dockings, findings, inspections, sedimentZones, tanks } from "@/db/schema";
+import { anodeRecords, dockingItems, dockings, findings, inspections, sedimentZones, tankLatestInspections, tanks } from "@/db/schema";
 import type { TWriter } from "@/db/seed/builders";
 import type { TWorkItem, TWorkSource } from "@/lib/office/work-list";
 import type { TDockingInput } from "@/lib/schemas/docking";
@@ -76,14 +76,57 @@ export async function listDockingItems(scope: TDockingScope) {
     .orderBy(asc(tanks.code), asc(dockingItems.kind), asc(dockingItems.description));
 }
 
+/** Each tank's latest countersigned inspection of the vessel (tank_latest_inspections), by tank code. */
+export async function listLatestInspections(scope: TVesselScope) {
+  return db()
+    .select({ tankId: tankLatestInspections.tankId, tankCode: tanks.code, inspectionId: tankLatestInspections.inspectionId, inspectedOn: tankLatestInspections.inspectedOn })
+    .from(tankLatestInspections)
+    .innerJoin(tanks, and(eq(tanks.orgId, tankLatestInspections.orgId), eq(tanks.id, tankLatestInspections.tankId)))
+    .where(and(eq(tankLatestInspections.orgId, scope.orgId), eq(tankLatestInspections.vesselId, scope.vesselId)))
+    .orderBy(asc(tanks.code));
+}
+
+/**
+ * The open findings of the given inspections that carry neither a steel nor a
+ * coating quantity, with what describes them: the candidates that
+ * lib/office/work-list.ts gatherWorkItems reports as unpriced.
+ */
+export async function listOpenFindingsWithoutQuantities({ orgId, inspectionIds }: TOrgScope & { inspectionIds: readonly string[] }) {
+  if (!inspectionIds.length) return [];
+  return db()
+    .select({
+      inspectionId: findings.inspectionId,
+      id: findings.id,
+      number: findings.number,
+      status: findings.status,
+      type: findings.type,
+      frameFrom: findings.frameFrom,
+      frameTo: findings.frameTo,
+      memberKind: findings.memberKind,
+      memberNumber: findings.memberNumber,
+      platingRegion: findings.platingRegion,
+      repairKind: findings.repairKind,
+      steelWeightKg: findings.steelWeightKg,
+      coatingRepairM2: findings.coatingRepairM2,
+    })
+    .from(findings)
+    .where(
+      and(
+        eq(findings.orgId, orgId),
+        inArray(findings.inspectionId, [...inspectionIds]),
+        eq(findings.status, "open"),
+        sql`coalesce(${findings.steelWeightKg}, 0) <= 0 and coalesce(${findings.coatingRepairM2}, 0) <= 0`,
+      ),
+    );
+}
+
 /** Each tank's latest countersigned inspection of the vessel, with what the work list needs of it. */
 export async function listWorkSources(scope: TVesselScope, w: TWriter = db()): Promise<TWorkSource[]> {
   const latest = await w
-    .selectDistinctOn([inspections.tankId], { inspectionId: inspections.id, tankId: inspections.tankId, tankCode: tanks.code, inspectedOn: inspections.inspectedOn })
-    .from(inspections)
-    .innerJoin(tanks, and(eq(tanks.orgId, inspections.orgId), eq(tanks.id, inspections.tankId)))
-    .where(and(eq(inspections.orgId, scope.orgId), eq(inspections.vesselId, scope.vesselId), eq(inspections.status, "countersigned")))
-    .orderBy(inspections.tankId, desc(inspections.inspectedOn), desc(inspections.revision), desc(inspections.countersignedAt));
+    .select({ inspectionId: tankLatestInspections.inspectionId, tankId: tankLatestInspections.tankId, tankCode: tanks.code, inspectedOn: tankLatestInspections.inspectedOn })
+    .from(tankLatestInspections)
+    .innerJoin(tanks, and(eq(tanks.orgId, tankLatestInspections.orgId), eq(tanks.id, tankLatestInspections.tankId)))
+    .where(and(eq(tankLatestInspections.orgId, scope.orgId), eq(tankLatestInspections.vesselId, scope.vesselId)));
   if (!latest.length) return [];
   const ids = latest.map((l) => l.inspectionId);
   const [fs, anodes, zones] = await Promise.all([

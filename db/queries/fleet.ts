@@ -1,9 +1,8 @@
 import "server-only";
 // The fleet overview in SQL: every tank in scope with its latest countersigned
-// inspection (a lateral join that walks inspections_tank_idx: org_id, tank_id,
-// inspected_on, newest first), the coating rating of that inspection's worst
-// area, the interval that applies (the vessel's own inspection_intervals row,
-// else the company's) and the due date. Filters, ordering, LIMIT/OFFSET and the
+// inspection and the coating rank of its worst area (tank_latest_inspections,
+// kept by database triggers, see db/schema.ts), the interval that applies (the
+// vessel's own inspection_intervals row, else the company's) and the due date. Filters, ordering, LIMIT/OFFSET and the
 // counts run in the database: no page loads the fleet into memory.
 //
 // Rating and due date are computed here to filter, count and page. The rows
@@ -31,47 +30,27 @@ export type TFleetFilters = { rating?: TFleetRatingFilter; dueWithin?: number };
 /** Days ahead that the "due within 30 days" count looks. */
 export const DUE_SOON_DAYS = 30;
 
-/** Rank of one coating area, 0 GOOD, 1 FAIR, 2 POOR: the thresholds of rateCoatingArea (IMO MSC.1/Circ.1330 §4.1.3 Table 1). */
-const areaRank = (rule: TTwentyPercentRule) => sql`
-  case
-    when greatest(ca.breakdown_pct, ca.rusted_pct) > 20
-      or (${rule === "wording"}::boolean and greatest(ca.breakdown_pct, ca.rusted_pct) >= 20)
-      or ca.hard_scale_pct >= 10
-      or coalesce(ca.edges_rusted_pct, 0) > 50 then 2
-    when greatest(ca.breakdown_pct, ca.rusted_pct) >= 3
-      or ca.hard_scale_pct > 0
-      or coalesce(ca.edges_rusted_pct, 0) >= 20 then 1
-    else 0
-  end`;
-
 /** `with … dated`: one row per tank in scope. Every table is read with the company in its where. */
 function datedTanks(scope: TFleetScope): SQL {
   const { orgId, vesselIds } = scope;
   const vesselWhere = vesselIds ? sql`and t.vessel_id in (${sql.join(vesselIds.map((id) => sql`${id}::uuid`), sql`, `)})` : sql``;
+  // The stored rank under the company's reading of the 20 % boundary (db/schema.ts tankLatestInspections).
+  const rank = scope.twentyPercentRule === "wording" ? sql`tl.rank_wording` : sql`tl.rank_table`;
   return sql`
     with scoped as (
       select t.id as tank_id, t.vessel_id, t.code, t.name as tank_name, t.kind, t.side, t.coating_system, t.sort_order,
              v.name as vessel_name, v.vessel_type,
-             li.id as inspection_id, li.inspected_on, li.revision,
-             iv.default_months, iv.below_good_months, cr.rating_rank
+             tl.inspection_id, tl.inspected_on, tl.revision,
+             iv.default_months, iv.below_good_months, ${rank} as rating_rank
       from tanks t
       join vessels v on v.id = t.vessel_id and v.org_id = ${orgId}::uuid
-      left join lateral (
-        select i.id, i.inspected_on, i.revision from inspections i
-        where i.org_id = ${orgId}::uuid and i.tank_id = t.id and i.status = 'countersigned'
-        order by i.inspected_on desc, i.revision desc
-        limit 1
-      ) li on true
+      left join tank_latest_inspections tl on tl.tank_id = t.id and tl.org_id = ${orgId}::uuid
       left join lateral (
         select ii.default_months, ii.below_good_months from inspection_intervals ii
         where ii.org_id = ${orgId}::uuid and (ii.vessel_id = t.vessel_id or ii.vessel_id is null)
         order by ii.vessel_id nulls last
         limit 1
       ) iv on true
-      left join lateral (
-        select max(${areaRank(scope.twentyPercentRule)}) as rating_rank from coating_areas ca
-        where ca.org_id = ${orgId}::uuid and ca.inspection_id = li.id
-      ) cr on true
       where t.org_id = ${orgId}::uuid ${vesselWhere}
     ), dated as (
       select s.*,

@@ -7,7 +7,7 @@ import { z } from "zod";
 import { ZApiTokenInput } from "@/lib/schemas/api-token";
 import { ZCommentInput } from "@/lib/schemas/comment";
 import { ZIntervalsInput } from "@/lib/schemas/intervals";
-import { ZDockingDecisions, ZDockingDoneInput, ZDockingInput, ZDockingStatusInput } from "@/lib/schemas/docking";
+import { ZDockingDecisions, ZDockingDoneInput, ZDockingInput, ZDockingStatusInput, ZWorkListQuery } from "@/lib/schemas/docking";
 import { ZFleetQuery } from "@/lib/schemas/fleet";
 import { findingInputSchema, notInspectedInputSchema, sedimentInputSchema, ZAnodesInput, ZCoatingInput, ZEntryRecordInput, ZFindingsFlagInput, ZHeaderInput, ZInspectionStart, ZReadingInput, ZRemarksInput } from "@/lib/schemas/inspection";
 import { ZPasswordResetConfirm, ZPasswordResetRequest } from "@/lib/schemas/password-reset";
@@ -186,12 +186,12 @@ export const API_OPERATIONS: TApiOperation[] = [
   // ---- dockings (office)
   { method: "get", path: "/api/v1/vessels/{vesselId}/dockings", tag: "Dockings", summary: "The vessel's dockings, latest planned first (office)", response: ok("Every docking of the vessel.") },
   { method: "post", path: "/api/v1/vessels/{vesselId}/dockings", tag: "Dockings", summary: "Plan a docking with its unit rates; its work list is gathered", body: ZDockingInput, response: ok("The new docking.", 201) },
-  { method: "get", path: "/api/v1/dockings/{dockingId}", tag: "Dockings", summary: "A docking with its priced work list", response: ok("The docking, its items, the cost of each and the totals.") },
-  { method: "put", path: "/api/v1/dockings/{dockingId}/items", tag: "Dockings", summary: "Include, exclude or adjust work-list items, with a reason", body: ZDockingDecisions, response: ok("The docking as saved.") },
-  { method: "post", path: "/api/v1/dockings/{dockingId}/rebuild", tag: "Dockings", summary: "Gather the work list again from the latest countersigned reports", response: ok("The docking; decisions stay with their items.") },
+  { method: "get", path: "/api/v1/dockings/{dockingId}", tag: "Dockings", summary: "A docking with one page of its priced work list", query: ZWorkListQuery, response: ok("The docking, one page of items (optionally one tank's) with the cost of each, and the totals over every item.") },
+  { method: "put", path: "/api/v1/dockings/{dockingId}/items", tag: "Dockings", summary: "Include, exclude or adjust work-list items, with a reason", query: ZWorkListQuery, body: ZDockingDecisions, response: ok("The docking as saved, with the page of items asked for.") },
+  { method: "post", path: "/api/v1/dockings/{dockingId}/rebuild", tag: "Dockings", summary: "Gather the work list again from the latest countersigned reports", query: ZWorkListQuery, response: ok("The docking; decisions stay with their items.") },
   { method: "get", path: "/api/v1/dockings/{dockingId}/work-list.csv", tag: "Dockings", summary: "The priced work list as CSV", response: ok("Header, one row per item, totals per kind and the grand total.", 200, "text/csv") },
-  { method: "put", path: "/api/v1/dockings/{dockingId}/status", tag: "Dockings", summary: "Start, complete or cancel a docking; completed and cancelled are final", body: ZDockingStatusInput, response: ok("The docking with its new status.") },
-  { method: "put", path: "/api/v1/dockings/{dockingId}/done", tag: "Dockings", summary: "Mark items done while the docking is in progress; a finding closes when all its items are done", body: ZDockingDoneInput, response: ok("The closed and reopened findings, and the docking.") },
+  { method: "put", path: "/api/v1/dockings/{dockingId}/status", tag: "Dockings", summary: "Start, complete or cancel a docking; completed and cancelled are final", query: ZWorkListQuery, body: ZDockingStatusInput, response: ok("The docking with its new status.") },
+  { method: "put", path: "/api/v1/dockings/{dockingId}/done", tag: "Dockings", summary: "Mark items done while the docking is in progress; a finding closes when all its items are done", query: ZWorkListQuery, body: ZDockingDoneInput, response: ok("The closed and reopened findings, and the docking.") },
   { method: "get", path: "/api/v1/dockings/{dockingId}/work-list.pdf", tag: "Dockings", summary: "The priced work list as PDF", response: ok("Items, totals per kind and the grand total.", 200, "application/pdf") },
   { method: "get", path: "/api/v1/openapi.json", tag: "API", auth: "public", summary: "This document", response: ok("The OpenAPI 3.1 document.") },
 ];

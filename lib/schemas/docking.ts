@@ -1,6 +1,6 @@
 import { z } from "zod";
 import { DOCKING_STATUSES } from "@/lib/vocabulary";
-import { numberFromForm, optionalText } from "./common";
+import { blankParam, numberFromForm, optionalText, searchParamReader, wholeParam } from "./common";
 
 // A docking (yard, place, planned date, currency, unit rates) and the
 // superintendent's decision on one work-list item.
@@ -79,3 +79,18 @@ export const ZDockingDoneInput = z.object({
   itemIds: z.array(z.string({ error: "must be item ids" })).min(1, "name at least one item").max(1000, "at most 1000 items at once"),
   done: z.boolean({ error: "say whether the items are done" }),
 });
+
+export const WORK_LIST_PAGE_SIZE_MAX = 500;
+
+/** One page of a work list's items (the totals always cover every item), optionally one tank's. */
+export const ZWorkListQuery = z.object({
+  tank: z.preprocess(blankParam, z.uuid({ error: "tank must be the id of a tank" }).optional()),
+  page: z.preprocess(blankParam, wholeParam("page", 1, 100_000).default(1)),
+  pageSize: z.preprocess(blankParam, wholeParam("pageSize", 1, WORK_LIST_PAGE_SIZE_MAX).default(100)),
+});
+export type TWorkListQuery = z.infer<typeof ZWorkListQuery>;
+
+export function workListQueryFromParams(params: Parameters<typeof searchParamReader>[0]) {
+  const get = searchParamReader(params);
+  return ZWorkListQuery.safeParse({ tank: get("tank"), page: get("page"), pageSize: get("pageSize") });
+}

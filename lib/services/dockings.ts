@@ -7,11 +7,11 @@ import { z } from "zod";
 import * as q from "@/db/queries/dockings";
 import type { TActor } from "@/lib/auth/actor";
 import { authorizeVessel } from "@/lib/auth/authorize";
-import { AppError } from "@/lib/errors";
+import { AppError, issuesFromZod } from "@/lib/errors";
 import { validateInput } from "@/lib/http/route";
 import { workListCsv } from "@/lib/office/work-list-csv";
 import { gatherWorkItems, priceWorkList, WORK_KINDS, type TWorkKind, type TWorkSource } from "@/lib/office/work-list";
-import { ZDockingDecisions, ZDockingDoneInput, ZDockingInput, ZDockingStatusInput } from "@/lib/schemas/docking";
+import { workListQueryFromParams, ZDockingDecisions, ZDockingDoneInput, ZDockingInput, ZDockingStatusInput, type TWorkListQuery } from "@/lib/schemas/docking";
 import { DOCKING_STATUS_LABELS, type TRole } from "@/lib/vocabulary";
 
 /** Who plans dockings and reads their work lists: the office. */
@@ -51,26 +51,54 @@ export async function createDockingAs(actor: TActor, vesselId: string, body: unk
   return q.createDocking({ orgId, vesselId, actorUserId: actor.userId, input, gather });
 }
 
-/** The docking with its priced work list, and the open findings the yard cannot price (no quantities). */
-export async function getDockingAs(actor: TActor, dockingId: string) {
+/** The docking with every item of its work list, priced (for the exports). */
+export async function readWorkListAs(actor: TActor, dockingId: string) {
   const { orgId, vessel } = await authorizeDocking(actor, dockingId);
-  const docking = await q.getDocking({ orgId, dockingId });
+  const [docking, rows] = await Promise.all([q.getDocking({ orgId, dockingId }), q.listDockingItems({ orgId, dockingId })]);
   if (!docking) throw new AppError("not_found", "No such docking.");
-  const [rows, sources] = await Promise.all([q.listDockingItems({ orgId, dockingId }), q.listWorkSources({ orgId, vesselId: docking.vesselId })]);
   // Items are gathered with the four work kinds only; "other" is kept in the enum for hand-added work.
   const items = rows.flatMap((r) => (isWorkKind(r.kind) ? [{ ...r, key: r.id, kind: r.kind }] : []));
-  const workList = priceWorkList(items, docking);
+  return { orgId, vessel: { id: vessel.id, name: vessel.name, imoNumber: vessel.imoNumber }, docking, workList: priceWorkList(items, docking) };
+}
+
+/** The page of a work list the request asks for (?tank=&page=&pageSize=); a bad value is refused (400). */
+export function workListViewFromParams(params: Parameters<typeof workListQueryFromParams>[0]): TWorkListQuery {
+  const parsed = workListQueryFromParams(params);
+  if (!parsed.success) throw new AppError("bad_request", "The work-list page is not valid.", issuesFromZod(parsed.error.issues));
+  return parsed.data;
+}
+
+const FIRST_PAGE: TWorkListQuery = { page: 1, pageSize: 100 };
+
+/**
+ * The docking with one page of its priced work list (totals and counts over
+ * every item), the tanks it was gathered from, and the open findings the yard
+ * cannot price (no quantities).
+ */
+export async function getDockingAs(actor: TActor, dockingId: string, params: TWorkListQuery | URLSearchParams = FIRST_PAGE) {
+  const { orgId, vessel, docking, workList } = await readWorkListAs(actor, dockingId);
+  // Search params are read once the actor is known to be allowed in.
+  const view = params instanceof URLSearchParams ? workListViewFromParams(params) : params;
+  const sources = await q.listLatestInspections({ orgId, vesselId: docking.vesselId });
+  const candidates = await q.listOpenFindingsWithoutQuantities({ orgId, inspectionIds: sources.map((s) => s.inspectionId) });
+  const unpriced = gatherWorkItems(
+    sources.map((s) => ({ ...s, findings: candidates.filter((f) => f.inspectionId === s.inspectionId), anodes: null, sedimentZones: [] })),
+  ).unpriced;
+  const matching = view.tank ? workList.items.filter((i) => i.tankId === view.tank) : workList.items;
+  const totalPages = Math.max(1, Math.ceil(matching.length / view.pageSize));
+  const start = (view.page - 1) * view.pageSize;
   return {
-    vessel: { id: vessel.id, name: vessel.name, imoNumber: vessel.imoNumber },
+    vessel,
     docking,
-    workList,
-    unpriced: gatherWorkItems(sources).unpriced,
+    workList: { ...workList, items: matching.slice(start, start + view.pageSize) },
+    paging: { page: view.page, pageSize: view.pageSize, tank: view.tank ?? null, matching: matching.length, totalPages },
+    unpriced,
     sources: sources.map((s) => ({ tankId: s.tankId, tankCode: s.tankCode, inspectionId: s.inspectionId, inspectedOn: s.inspectedOn })),
   };
 }
 
 /** Include, exclude or adjust items; every exclusion and adjustment needs a reason, and each change is audit-logged. */
-export async function decideDockingItemsAs(actor: TActor, dockingId: string, body: unknown) {
+export async function decideDockingItemsAs(actor: TActor, dockingId: string, body: unknown, view?: TWorkListQuery) {
   const { orgId } = await authorizeDocking(actor, dockingId);
   const input = validateInput(ZDockingDecisions, body);
   const issues = input.items.flatMap((d, n) =>
@@ -82,20 +110,20 @@ export async function decideDockingItemsAs(actor: TActor, dockingId: string, bod
   if (!result) throw new AppError("not_found", "No such docking.");
   if (result.locked) throw lockedError(result.locked);
   if (result.unknown) throw new AppError("not_found", "No such item in this docking; nothing was changed.", result.unknown.map((id) => ({ path: "items", message: `${id} is not an item of this docking` })));
-  return { changed: result.changed ?? 0, ...(await getDockingAs(actor, dockingId)) };
+  return { changed: result.changed ?? 0, ...(await getDockingAs(actor, dockingId, view)) };
 }
 
 /** Gathers the work again from the latest countersigned reports, keeping each item's decision. */
-export async function rebuildDockingAs(actor: TActor, dockingId: string) {
+export async function rebuildDockingAs(actor: TActor, dockingId: string, view?: TWorkListQuery) {
   const { orgId } = await authorizeDocking(actor, dockingId);
   const result = await q.rebuildDocking({ orgId, dockingId, actorUserId: actor.userId, gather });
   if (!result) throw new AppError("not_found", "No such docking.");
   if (result.locked) throw lockedError(result.locked);
-  return { changes: result.changes!, ...(await getDockingAs(actor, dockingId)) };
+  return { changes: result.changes!, ...(await getDockingAs(actor, dockingId, view)) };
 }
 
 export async function workListCsvAs(actor: TActor, dockingId: string) {
-  const { vessel, docking, workList } = await getDockingAs(actor, dockingId);
+  const { vessel, docking, workList } = await readWorkListAs(actor, dockingId);
   const csv = workListCsv(workList, { vesselName: vessel.name, yard: docking.yard, place: docking.place, plannedOn: docking.plannedOn });
   const fileName = `work-list-${vessel.name}-${docking.plannedOn}.csv`.replace(/[^A-Za-z0-9._-]+/g, "-");
   return { csv, fileName };
@@ -103,7 +131,7 @@ export async function workListCsvAs(actor: TActor, dockingId: string) {
 
 
 /** Starts, completes or cancels the docking; a completed or cancelled docking is final. */
-export async function setDockingStatusAs(actor: TActor, dockingId: string, body: unknown) {
+export async function setDockingStatusAs(actor: TActor, dockingId: string, body: unknown, view?: TWorkListQuery) {
   const { orgId } = await authorizeDocking(actor, dockingId);
   const { status } = validateInput(ZDockingStatusInput, body);
   const result = await q.setDockingStatus({ orgId, dockingId, actorUserId: actor.userId, to: status });
@@ -111,12 +139,12 @@ export async function setDockingStatusAs(actor: TActor, dockingId: string, body:
   if (result.refused) {
     throw new AppError("conflict", `A docking that is ${DOCKING_STATUS_LABELS[result.refused].toLowerCase()} cannot become ${DOCKING_STATUS_LABELS[status].toLowerCase()}.`, [{ path: "status", message: `cannot change from ${result.refused} to ${status}` }]);
   }
-  return getDockingAs(actor, dockingId);
+  return getDockingAs(actor, dockingId, view);
 }
 
 
 /** While the docking is in progress: marks included items done (closing a finding once all its items are done) or not done. */
-export async function markDockingItemsDoneAs(actor: TActor, dockingId: string, body: unknown) {
+export async function markDockingItemsDoneAs(actor: TActor, dockingId: string, body: unknown, view?: TWorkListQuery) {
   const { orgId } = await authorizeDocking(actor, dockingId);
   const input = validateInput(ZDockingDoneInput, body);
   const result = await q.markItemsDone({ orgId, dockingId, actorUserId: actor.userId, itemIds: input.itemIds, done: input.done });
@@ -125,5 +153,5 @@ export async function markDockingItemsDoneAs(actor: TActor, dockingId: string, b
     throw new AppError("conflict", `Items are marked done while the docking is in progress; this one is ${DOCKING_STATUS_LABELS[result.refused].toLowerCase()}.`, [{ path: "status", message: `the docking is ${result.refused}` }]);
   }
   if (result.unknown) throw new AppError("not_found", "No such included item in this docking; nothing was changed.", result.unknown.map((id) => ({ path: "itemIds", message: `${id} is not an included item of this docking` })));
-  return { closedFindings: result.closed ?? [], reopenedFindings: result.reopened ?? [], ...(await getDockingAs(actor, dockingId)) };
+  return { closedFindings: result.closed ?? [], reopenedFindings: result.reopened ?? [], ...(await getDockingAs(actor, dockingId, view)) };
 }

@@ -112,6 +112,46 @@ describe("planning a docking", () => {
   });
 });
 
+describe("paging the work list", () => {
+  it("returns the page asked for; the totals and counts still cover every item", async () => {
+    // Six items, ordered by tank code, then kind in the list's order (steel, coating × 3, anodes, sediment): page 2 of 4 a page.
+    const b = (await body(await superintendent.request(`/api/v1/dockings/${dockingId}?pageSize=4&page=2`))) as TBody & { paging: unknown };
+    expect(b.workList.items.map((i) => i.kind)).toEqual(["anodes", "sediment"]);
+    expect(b.paging).toEqual({ page: 2, pageSize: 4, tank: null, matching: 6, totalPages: 2 });
+    expect(b.workList.grandTotal).toBe(954.15); // worked by hand at the top of this file
+    expect(b.workList.totals.coating).toMatchObject({ cost: 184.6, included: 3 });
+  });
+
+  it("shows one tank's items, or none for a tank without work, with the same totals", async () => {
+    const own = (await body(await superintendent.request(`/api/v1/dockings/${dockingId}?tank=${s.tankOf(s.ownVessel.id).id}`))) as TBody & { paging: { matching: number } };
+    expect(own.paging.matching).toBe(6);
+    const none = (await body(await superintendent.request(`/api/v1/dockings/${dockingId}?tank=${randomUUID()}`))) as TBody & { paging: { matching: number; totalPages: number } };
+    expect(none.workList.items).toEqual([]);
+    expect(none.paging).toMatchObject({ matching: 0, totalPages: 1 });
+    expect(none.workList.grandTotal).toBe(954.15);
+  });
+
+  it("refuses a page that is not a whole number in range, and a decision sent with one changes nothing", async () => {
+    for (const q of ["page=0", "pageSize=501", "page=two", "tank=7"]) {
+      const res = await superintendent.request(`/api/v1/dockings/${dockingId}?${q}`);
+      expect(res.status, q).toBe(400);
+      const e = (await res.json()) as { error: { message: string; issues: { message: string }[] } };
+      expect(e.error.message).toBe("The work-list page is not valid.");
+      expect(e.error.issues[0]!.message).toMatch(/^(page|pageSize|tank) /);
+    }
+    const [item] = (await body(await superintendent.request(`/api/v1/dockings/${dockingId}`))).workList.items;
+    const res = await superintendent.request(`/api/v1/dockings/${dockingId}/items?pageSize=0`, { method: "PUT", json: { items: [{ id: item!.id, included: false, adjustmentReason: "Crew will do it" }] } });
+    expect(res.status).toBe(400);
+    expect(await testDb().$count(auditLog, and(eq(auditLog.orgId, s.org.id), eq(auditLog.action, "docking_item.decide")))).toBe(0);
+    expect((await body(await superintendent.request(`/api/v1/dockings/${dockingId}`))).workList.items[0]!.included).toBe(true);
+  });
+
+  it("does not tell a ship's officer whether a page is valid: the docking is the office's (403 first)", async () => {
+    const res = await officer.request(`/api/v1/dockings/${dockingId}?page=0`);
+    expect(res.status).toBe(403);
+  });
+});
+
 describe("deciding on items", () => {
   const itemOf = async (kind: string, quantity: number) => (await body(await superintendent.request(`/api/v1/dockings/${dockingId}`))).workList.items.find((i) => i.kind === kind && i.quantity === quantity)!;
 

@@ -1,7 +1,7 @@
 import type { Metadata } from "next";
 import { FleetCounts } from "@/components/fleet/fleet-counts";
 import { FleetFilters } from "@/components/fleet/fleet-filters";
-import { FleetPager } from "@/components/fleet/fleet-pager";
+import { Pager } from "@/components/ui/pager";
 import { FleetTankTable } from "@/components/fleet/fleet-tank-table";
 import { IntervalSettings } from "@/components/fleet/interval-settings";
 import { RatingMark } from "@/components/fleet/rating-mark";
@@ -76,7 +76,7 @@ export default async function FleetPage({ searchParams }: { searchParams: Promis
           <span>Ratings from the latest countersigned report; a tank takes the rating of its worst area (IMO MSC.1/Circ.1330).</span>
         </p>
         {overview.tanks.length ? <FleetTankTable tanks={overview.tanks} /> : <Notice>No tank matches these filters.</Notice>}
-        <FleetPager {...overview.paging} hrefFor={(page) => fleetHref({ ...q, page })} />
+        <Pager noun="Tanks" {...overview.paging} hrefFor={(page) => fleetHref({ ...q, page })} />
         {intervals ? <IntervalSettings company={intervals.company} overrides={intervals.vessels} vessels={overview.vessels.map((v) => ({ id: v.id, name: v.name }))} /> : null}
         {showVesselList ? (
           <section className="space-y-2">

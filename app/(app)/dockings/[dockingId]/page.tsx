@@ -4,16 +4,31 @@ import { DockingStatusActions } from "@/components/dockings/docking-status-actio
 import { WorkListEditor } from "@/components/dockings/work-list-editor";
 import { Notice } from "@/components/ui/notice";
 import { PageHeader } from "@/components/ui/page-header";
+import { Pager } from "@/components/ui/pager";
 import { pageActor, pageAuthorize } from "@/lib/auth/page";
+import { workListQueryFromParams } from "@/lib/schemas/docking";
 import { getDockingAs } from "@/lib/services/dockings";
 import { DOCKING_STATUS_LABELS } from "@/lib/vocabulary";
 
 export const metadata: Metadata = { title: "Work list" };
 
-export default async function WorkListPage({ params }: { params: Promise<{ dockingId: string }> }) {
+type TSearch = Record<string, string | string[] | undefined>;
+
+export default async function WorkListPage({ params, searchParams }: { params: Promise<{ dockingId: string }>; searchParams: Promise<TSearch> }) {
   const { dockingId } = await params;
   const actor = await pageActor();
-  const { vessel, docking, workList, unpriced, sources } = await pageAuthorize(() => getDockingAs(actor, dockingId));
+  const asked = workListQueryFromParams(await searchParams);
+  const view = asked.success ? asked.data : { page: 1, pageSize: 100 };
+  const { vessel, docking, workList, paging, unpriced, sources } = await pageAuthorize(() => getDockingAs(actor, dockingId, view));
+  const hrefFor = (page: number, tank = paging.tank) => {
+    const q = new URLSearchParams();
+    if (tank) q.set("tank", tank);
+    if (page > 1) q.set("page", String(page));
+    if (paging.pageSize !== 100) q.set("pageSize", String(paging.pageSize));
+    const t = q.toString();
+    return t ? `/dockings/${docking.id}?${t}` : `/dockings/${docking.id}`;
+  };
+  const viewQuery = hrefFor(paging.page).split("?")[1] ?? "";
   const locked = docking.status === "completed" || docking.status === "cancelled";
   return (
     <>
@@ -26,14 +41,29 @@ export default async function WorkListPage({ params }: { params: Promise<{ docki
         }
       />
       <div className="space-y-4">
+        {asked.success ? null : <Notice tone="error" title="This page of the work list cannot be shown">{asked.error.issues.map((i) => i.message).join("; ")}. Showing the first page.</Notice>}
         {locked ? <Notice tone="caution">This docking is {DOCKING_STATUS_LABELS[docking.status].toLowerCase()}: its work list can no longer be changed.</Notice> : null}
         <p className="text-sm text-slate-700">
           Gathered from {sources.length ? sources.map((s) => `${s.tankCode} (${s.inspectedOn})`).join(", ") : "no countersigned report yet"}. Rates: steel {docking.steelRatePerKg}/kg, coating {docking.coatingRatePerM2}/m², anodes {docking.anodeRatePerPiece}/piece, sediment {docking.sedimentRatePerM3}/m³.
         </p>
         <DockingStatusActions dockingId={docking.id} status={docking.status} />
+        <form method="get" action={`/dockings/${docking.id}`} className="flex flex-wrap items-end gap-2 text-sm" aria-label="Show the items of one tank">
+          <label className="text-sm">
+            Tank
+            <select name="tank" defaultValue={paging.tank ?? ""} className="mt-1 block rounded-md border border-slate-300 bg-white px-2 py-1">
+              <option value="">All tanks</option>
+              {sources.map((s) => (
+                <option key={s.tankId} value={s.tankId}>{s.tankCode}</option>
+              ))}
+            </select>
+          </label>
+          <button type="submit" className="rounded-md border border-slate-300 bg-white px-3 py-1 font-semibold text-slate-800 hover:bg-slate-50">Show</button>
+        </form>
         <WorkListEditor
-          key={docking.status}
+          key={`${docking.status}:${viewQuery}`}
           dockingId={docking.id}
+          viewQuery={viewQuery}
+          itemsNote={paging.tank ? `Items of ${sources.find((s) => s.tankId === paging.tank)?.tankCode ?? "one tank"}; the totals below cover the whole list (${workList.counts.included + workList.counts.excluded} items).` : null}
           locked={locked}
           inProgress={docking.status === "in_progress"}
           initial={{
@@ -47,6 +77,7 @@ export default async function WorkListPage({ params }: { params: Promise<{ docki
             })),
           }}
         />
+        <Pager noun="Items" page={paging.page} totalPages={paging.totalPages} matching={paging.matching} pageSize={paging.pageSize} hrefFor={(page) => hrefFor(page)} />
         {unpriced.length ? (
           <Notice tone="caution" title="Open findings the yard cannot price">
             These open findings have no steel or coating quantity (monitor only, or not measured): {unpriced.map((u) => `${u.tankCode}: ${u.description}`).join("; ")}.

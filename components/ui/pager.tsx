@@ -1,13 +1,14 @@
 import Link from "next/link";
 
-export function FleetPager({ page, totalPages, matching, pageSize, hrefFor }: { page: number; totalPages: number; matching: number; pageSize: number; hrefFor: (page: number) => string }) {
+/** "Tanks 51–100 of 600 · page 2 of 12" with Previous / Next links; the server pages, this only links. */
+export function Pager({ noun, page, totalPages, matching, pageSize, hrefFor }: { noun: string; page: number; totalPages: number; matching: number; pageSize: number; hrefFor: (page: number) => string }) {
   const first = matching === 0 ? 0 : (page - 1) * pageSize + 1;
   const last = Math.min(matching, page * pageSize);
   const link = "rounded-md border border-slate-300 bg-white px-3 py-1 text-sm text-hull-700 hover:bg-slate-50";
   return (
     <nav aria-label="Pages" className="flex flex-wrap items-center justify-between gap-2 text-sm text-slate-700">
       <p>
-        {matching === 0 ? "No tanks match." : `Tanks ${first}–${last} of ${matching}`} · page {page} of {totalPages}
+        {matching === 0 ? `No ${noun.toLowerCase()} match.` : `${noun} ${first}–${last} of ${matching}`} · page {page} of {totalPages}
       </p>
       <div className="flex gap-2">
         {page > 1 ? (
