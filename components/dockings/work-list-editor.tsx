@@ -32,6 +32,8 @@ type TErrorBody = { error?: { message?: string; issues?: { path: string; message
 type TDraft = { included: boolean; adjustedQuantity: string; adjustmentReason: string };
 
 const quantityText = (q: number) => new Intl.NumberFormat("en", { maximumFractionDigits: 3 }).format(q);
+/** A column head over right-aligned numbers, aligned with them. */
+const numberHead = (label: string) => <span className="block text-right">{label}</span>;
 
 /** The priced work list; the office includes, excludes or adjusts items with a reason. Costs come from the server. */
 export function WorkListEditor({ dockingId, viewQuery, itemsNote, locked, inProgress, initial }: { dockingId: string; viewQuery: string; itemsNote: string | null; locked: boolean; inProgress: boolean; initial: TWorkListView }) {
@@ -92,10 +94,10 @@ export function WorkListEditor({ dockingId, viewQuery, itemsNote, locked, inProg
       </div>
       {itemsNote ? <p className="text-sm text-slate-700">{itemsNote}</p> : null}
       {list.items.length ? (
-        <Table head={["Tank", "Work", "Qty", "Unit rate", "Cost", ""]} caption="Work list items">
+        <Table head={["Tank", "Work", numberHead("Qty"), numberHead("Unit rate"), numberHead("Cost"), ""]} caption="Work list items">
           {list.items.map((i) => (
             <tr key={i.id} data-testid="work-item" className={i.included ? "" : "text-slate-500 line-through"}>
-              <Cell>{i.tankCode ?? "—"}</Cell>
+              <Cell className="whitespace-nowrap">{i.tankCode ?? "—"}</Cell>
               <Cell>
                 {i.description}
                 {i.adjustmentReason ? <span className="block text-xs text-slate-600 no-underline">Reason: {i.adjustmentReason}</span> : null}
@@ -142,7 +144,7 @@ export function WorkListEditor({ dockingId, viewQuery, itemsNote, locked, inProg
       )}
       <section aria-labelledby="totals-heading">
         <h2 id="totals-heading" className="mb-2 text-lg font-semibold text-hull-900">Totals ({list.currency})</h2>
-        <Table head={["Kind", "Quantity", "Items", "Cost"]} caption="Totals per kind">
+        <Table head={["Kind", numberHead("Quantity"), "Items", numberHead("Cost")]} caption="Totals per kind">
           {WORK_KINDS.map((k) => (
             <tr key={k} data-testid={`total-${k}`}>
               <Cell>{WORK_KIND_LABELS[k]}</Cell>

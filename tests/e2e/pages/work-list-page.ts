@@ -1,4 +1,4 @@
-import type { Page } from "playwright-core";
+import type { Locator, Page } from "playwright-core";
 
 /** The docking pages: the new-docking form and the work list. */
 export class WorkListPage {
@@ -19,6 +19,32 @@ export class WorkListPage {
 
   total(kind: string) {
     return this.page.getByTestId(`total-${kind}`);
+  }
+
+  /** The cells of each row (kind totals, grand total, work items) as the reader sees them. */
+  async totalCells(kind: string) {
+    return this.cellTexts(this.total(kind));
+  }
+
+  async grandTotalCells() {
+    return this.cellTexts(this.grandTotal());
+  }
+
+  /** Each work item's cells: tank, work, quantity, unit rate, cost, actions. */
+  async itemRows() {
+    const rows = this.page.getByTestId("work-item");
+    const out: string[][] = [];
+    for (let n = 0; n < (await rows.count()); n += 1) out.push(await this.cellTexts(rows.nth(n)));
+    return out;
+  }
+
+  /** The line that says which countersigned reports the list was gathered from, and the rates. */
+  sources() {
+    return this.page.getByText(/^Gathered from /);
+  }
+
+  private async cellTexts(row: Locator) {
+    return (await row.locator("td").allInnerTexts()).map((t) => t.replace(/\s+/g, " ").trim());
   }
 
   async adjust(description: RegExp, quantity: string, reason: string) {
