@@ -109,6 +109,7 @@ export const API_OPERATIONS: TApiOperation[] = [
   { method: "patch", path: "/api/v1/vessels/{vesselId}/tanks/{tankId}", tag: "Tanks", summary: "Change a tank", body: ZTank, response: ok("The tank as saved.") },
   { method: "delete", path: "/api/v1/vessels/{vesselId}/tanks/{tankId}", tag: "Tanks", summary: "Remove a tank that has no inspections", response: ok("The tank is removed.") },
   { method: "get", path: "/api/v1/vessels/{vesselId}/tanks/{tankId}/history", tag: "Tanks", summary: "A tank's history: every inspection, plotted series of the signed ones, recurring findings", response: ok("The history.") },
+  { method: "get", path: "/api/v1/vessels/{vesselId}/tanks/{tankId}/history.pdf", tag: "Tanks", summary: "A tank's history as PDF: inspections with their signed PDFs' fingerprints, the three plots, recurring findings", response: ok("The history.", 200, PDF) },
   { method: "get", path: "/api/v1/vessels/{vesselId}/tanks/{tankId}/brief.pdf", tag: "Tanks", summary: "The pre-entry brief of a tank as PDF", response: ok("The brief.", 200, PDF) },
   { method: "post", path: "/api/v1/vessels/{vesselId}/tanks/{tankId}/members", tag: "Tanks", summary: "Add a structural member to the tank's catalogue", body: memberInputSchema(ANY_TANK), response: ok("The new member.", 201) },
   { method: "delete", path: "/api/v1/vessels/{vesselId}/tanks/{tankId}/members/{memberId}", tag: "Tanks", summary: "Remove a structural member", response: ok("The member is removed.") },

@@ -1,12 +1,19 @@
-// A line chart over dates as renderer-neutral shapes, drawn by
-// components/history/line-chart-svg.tsx (web) and usable for a static SVG in
-// the PDF. Readable without colour: each series has its own marker shape and
-// dash pattern, the axes carry their units, and a legend names the series.
+// A line chart over dates as renderer-neutral shapes: the one geometry drawn by
+// components/history/line-chart-svg.tsx (the page before and without
+// JavaScript) and templates/parts/line-chart-pdf.tsx (the history PDF); the
+// browser chart (components/history/history-chart.tsx) takes its ticks,
+// colours, dashes and markers from it. Readable without colour: each series has
+// its own marker shape and dash pattern, the axes carry their units, and a
+// legend names the series.
 export type TChartSeries = { key: string; label: string; points: { date: string; value: number }[] };
 export type TChartMarker = "circle" | "square" | "triangle" | "diamond" | "cross" | "plus" | "triangle-down" | "dot";
 export type TChartInput = {
   title: string;
   yLabel: string;
+  /** The unit of the values, for tooltips ("%", "m³"). */
+  unit: string;
+  /** Decimals of a value in tooltips and tables (default 1). */
+  digits?: number;
   series: TChartSeries[];
   /** A dashed horizontal line with its label, e.g. the renewal threshold. */
   threshold?: { value: number; label: string };
@@ -21,6 +28,52 @@ export type TChartInput = {
 /** Eight series (the coating areas) each get their own marker and dash. */
 export const MARKERS: readonly TChartMarker[] = ["circle", "square", "triangle", "diamond", "cross", "plus", "triangle-down", "dot"];
 export const DASHES: readonly string[] = ["", "6 3", "2 3", "8 3 2 3", "12 4", "1 2", "4 2 1 2 1 2", "16 3 4 3"];
+/** Series colours from the app's palette (tailwind.config.ts, slate from Tailwind); colour only adds to marker and dash. */
+export const SERIES_COLOURS: readonly string[] = [
+  "#12253a", // hull-900
+  "#9a6a00", // rating-fair
+  "#2f5573", // hull-600
+  "#1f7a4d", // rating-good
+  "#64748b", // slate-500
+  "#1b3549", // hull-800
+  "#334155", // slate-700
+  "#244560", // hull-700
+];
+/** The renewal threshold: rating-poor, the colour the app gives to what needs work. */
+export const THRESHOLD_COLOUR = "#b42318";
+export const THRESHOLD_DASH = "10 4";
+export const PROJECTION_DASH = "1 4";
+export const PROJECTION_COLOUR = "#12253a"; // hull-900
+const MARKER_SIZE = 4.5;
+
+/**
+ * A marker as one SVG path around (x, y), so that the page, the browser chart
+ * and the PDF draw the same shapes: "open" is outlined on white, "solid" filled,
+ * "stroke" only lines (cross, plus).
+ */
+export function markerPath(shape: TChartMarker, x: number, y: number): { d: string; fill: "open" | "solid" | "stroke" } {
+  const s = MARKER_SIZE;
+  const t = s + 1;
+  const circle = (r: number) => `M${x - r} ${y} A${r} ${r} 0 1 0 ${x + r} ${y} A${r} ${r} 0 1 0 ${x - r} ${y} Z`;
+  switch (shape) {
+    case "circle":
+      return { d: circle(s), fill: "open" };
+    case "square":
+      return { d: `M${x - s} ${y - s} H${x + s} V${y + s} H${x - s} Z`, fill: "solid" };
+    case "triangle":
+      return { d: `M${x} ${y - t} L${x + t} ${y + s} L${x - t} ${y + s} Z`, fill: "open" };
+    case "diamond":
+      return { d: `M${x} ${y - t} L${x + t} ${y} L${x} ${y + t} L${x - t} ${y} Z`, fill: "solid" };
+    case "cross":
+      return { d: `M${x - s} ${y - s} L${x + s} ${y + s} M${x - s} ${y + s} L${x + s} ${y - s}`, fill: "stroke" };
+    case "triangle-down":
+      return { d: `M${x} ${y + t} L${x + t} ${y - s} L${x - t} ${y - s} Z`, fill: "solid" };
+    case "dot":
+      return { d: circle(s - 1.5), fill: "solid" };
+    case "plus":
+      return { d: `M${x - t} ${y} L${x + t} ${y} M${x} ${y - t} L${x} ${y + t}`, fill: "stroke" };
+  }
+}
 
 const LEGEND_PER_ROW = 3;
 const DAY_MS = 86_400_000;
@@ -44,14 +97,23 @@ export type TChartLayout = {
   plot: { x: number; y: number; width: number; height: number };
   title: string;
   yLabel: string;
+  unit: string;
+  digits: number;
   xLabel: string;
   yTicks: { value: number; y: number }[];
   xTicks: { date: string; x: number }[];
-  lines: { key: string; label: string; dash: string; marker: TChartMarker; path: string; legend: { x: number; y: number }; points: { x: number; y: number; date: string; value: number }[] }[];
-  threshold: { y: number; label: string } | null;
-  projection: { x1: number; y1: number; x2: number; y2: number; label: string } | null;
+  lines: { key: string; label: string; dash: string; marker: TChartMarker; colour: string; path: string; legend: { x: number; y: number }; points: { x: number; y: number; date: string; value: number }[] }[];
+  threshold: { y: number; value: number; label: string; labelX: number; labelY: number } | null;
+  /** The dotted line to the projected point, the label above its end (anchored at its end) and a drop line to the date axis. */
+  projection: { x1: number; y1: number; x2: number; y2: number; label: string; labelX: number; labelY: number; from: { date: string; value: number }; to: { date: string; value: number } } | null;
   empty: boolean;
 };
+
+function projectionLayout(p: NonNullable<TChartInput["projection"]>, sx: (date: string) => number, sy: (v: number) => number, r: (n: number) => number) {
+  const x2 = r(sx(p.to.date));
+  const y2 = r(sy(p.to.value));
+  return { x1: r(sx(p.from.date)), y1: r(sy(p.from.value)), x2, y2, label: p.label, labelX: x2 - 8, labelY: y2 - 6, from: p.from, to: p.to };
+}
 
 export function layoutLineChart(input: TChartInput): TChartLayout {
   const width = input.width ?? 640;
@@ -75,6 +137,7 @@ export function layoutLineChart(input: TChartInput): TChartLayout {
       label: s.label,
       dash: DASHES[i % DASHES.length]!,
       marker: MARKERS[i % MARKERS.length]!,
+      colour: SERIES_COLOURS[i % SERIES_COLOURS.length]!,
       path: points.map((p, j) => `${j ? "L" : "M"}${p.x} ${p.y}`).join(" "),
       legend: { x: plot.x + (i % LEGEND_PER_ROW) * Math.floor(plot.width / LEGEND_PER_ROW), y: plot.y + plot.height + 52 + 18 * Math.floor(i / LEGEND_PER_ROW) },
       points,
@@ -86,14 +149,14 @@ export function layoutLineChart(input: TChartInput): TChartLayout {
     plot,
     title: input.title,
     yLabel: input.yLabel,
+    unit: input.unit,
+    digits: input.digits ?? 1,
     xLabel: "Inspection date",
     yTicks: yTickValues.map((value) => ({ value, y: r(sy(value)) })),
     xTicks: dates.map((date) => ({ date, x: r(sx(date)) })),
     lines,
-    threshold: input.threshold ? { y: r(sy(input.threshold.value)), label: input.threshold.label } : null,
-    projection: input.projection
-      ? { x1: r(sx(input.projection.from.date)), y1: r(sy(input.projection.from.value)), x2: r(sx(input.projection.to.date)), y2: r(sy(input.projection.to.value)), label: input.projection.label }
-      : null,
+    threshold: input.threshold ? { y: r(sy(input.threshold.value)), value: input.threshold.value, label: input.threshold.label, labelX: plot.x + 4, labelY: r(sy(input.threshold.value) - 4) } : null,
+    projection: input.projection ? projectionLayout(input.projection, sx, sy, r) : null,
     empty: !input.series.some((s) => s.points.length),
   };
 }

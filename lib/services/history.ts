@@ -22,6 +22,8 @@ export type TTankHistoryInspection = {
   rating: TRating | null;
   /** The signed PDF, when one was rendered: GET /api/v1/inspections/{id}/signed-report. */
   signedReportUrl: string | null;
+  /** SHA-256 of the signed PDF, as /verify checks it. */
+  reportSha256: string | null;
   pageUrl: string;
 };
 
@@ -77,6 +79,7 @@ export async function getTankHistoryAs(actor: TActor, vesselId: string, tankId: 
     plotted: (PLOTTED_STATUSES as readonly string[]).includes(i.status),
     rating: ratingOf.get(i.id) ?? null,
     signedReportUrl: i.reportSha256 ? `/api/v1/inspections/${i.id}/signed-report` : null,
+    reportSha256: i.reportSha256 ?? null,
     pageUrl: `/inspections/${i.id}`,
   }));
 

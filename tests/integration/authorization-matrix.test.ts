@@ -129,6 +129,7 @@ const CASES: TCase[] = [
     scopes: ["own", "sibling", "other"], expect: (w, sc) => (vesselEditor(w, sc) === 200 ? 201 : vesselEditor(w, sc)),
   },
   { name: "GET /api/v1/vessels/:id/tanks/:tankId/history", path: (s, sc) => `${tankPath(s, sc)}/history`, scopes: ["own", "sibling", "other"], expect: vesselReader },
+  { name: "GET /api/v1/vessels/:id/tanks/:tankId/history.pdf", path: (s, sc) => `${tankPath(s, sc)}/history.pdf`, scopes: ["own", "sibling", "other"], expect: vesselReader },
   { name: "GET /api/v1/vessels/:id/tanks/:tankId/brief.pdf", path: (s, sc) => `${tankPath(s, sc)}/brief.pdf`, scopes: ["own", "sibling", "other"], expect: vesselReader },
   {
     name: "POST /api/v1/vessels/:id/tanks/import (preview)", method: "POST", path: (s, sc) => `/api/v1/vessels/${vesselOf(s, sc).id}/tanks/import`,

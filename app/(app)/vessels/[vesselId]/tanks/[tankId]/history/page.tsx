@@ -6,7 +6,7 @@ import { Notice } from "@/components/ui/notice";
 import { PageHeader } from "@/components/ui/page-header";
 import { Cell, Table } from "@/components/ui/table";
 import { pageActor, pageAuthorize } from "@/lib/auth/page";
-import { layoutLineChart } from "@/lib/office/history-chart";
+import { layoutHistoryPlots } from "@/lib/office/history-plots";
 import { getTankHistoryAs } from "@/lib/services/history";
 import { formatFrames } from "@/lib/structure/frames";
 import { FINDING_TYPE_LABELS, INSPECTION_STATUS_LABELS, MEMBER_KIND_LABELS, PLATING_REGION_LABELS } from "@/lib/vocabulary";
@@ -21,27 +21,8 @@ export default async function TankHistoryPage({ params }: { params: Promise<{ ve
   const h = await pageAuthorize(() => getTankHistoryAs(actor, vesselId, tankId));
   const dates = [...new Set(h.coating.flatMap((s) => s.points.map((p) => p.date)))].sort();
 
-  const coatingChart = layoutLineChart({
-    title: "Coating breakdown per area over time",
-    yLabel: "Breakdown (%)",
-    series: h.coating.map((s) => ({ key: s.area, label: s.label, points: s.points.map((p) => ({ date: p.date, value: p.breakdownPct })) })),
-    height: 340,
-  });
-  const last = h.anodes.points[h.anodes.points.length - 1];
+  const plots = layoutHistoryPlots(h);
   const projection = h.anodes.projection;
-  const anodeChart = layoutLineChart({
-    title: "Mean anode wastage over time",
-    yLabel: "Mean wastage (%)",
-    series: [{ key: "mean", label: "Mean wastage", points: h.anodes.points.map((p) => ({ date: p.date, value: p.meanWastagePct })) }],
-    threshold: { value: h.anodes.thresholdPct, label: `Renewal threshold ${fmt(h.anodes.thresholdPct, 0)} %` },
-    extraDates: projection ? [projection.date] : [],
-    projection: projection && last && projection.date > last.date ? { from: { date: last.date, value: last.meanWastagePct }, to: { date: projection.date, value: h.anodes.thresholdPct }, label: `projected ${projection.date}` } : undefined,
-  });
-  const sedimentChart = layoutLineChart({
-    title: "Sediment volume over time",
-    yLabel: "Sediment (m³)",
-    series: [{ key: "volume", label: "Sediment volume", points: h.sediment.map((p) => ({ date: p.date, value: p.volumeM3 })) }],
-  });
   const recurring = h.findings.filter((f) => f.recurring);
 
   return (
@@ -54,6 +35,7 @@ export default async function TankHistoryPage({ params }: { params: Promise<{ ve
             <Link href={`/vessels/${vesselId}`} className="text-hull-700 underline">{h.vessel.name}</Link>
           </>
         }
+        actions={<a href={`/api/v1/vessels/${vesselId}/tanks/${tankId}/history.pdf`} className="rounded-md bg-hull-700 px-3 py-2 text-sm font-semibold text-white hover:bg-hull-800" download>Download history PDF</a>}
       />
       <div className="space-y-6">
         <section aria-labelledby="inspections">
@@ -84,14 +66,14 @@ export default async function TankHistoryPage({ params }: { params: Promise<{ ve
         <HistoryPlot
           id="coating"
           title="Coating breakdown per area"
-          chart={coatingChart}
+          chart={plots.coating}
           head={["Area", ...dates]}
           rows={h.coating.map((s) => [s.label, ...dates.map((d) => { const p = s.points.find((x) => x.date === d); return p ? `${fmt(p.breakdownPct)} %` : "—"; })])}
         />
         <HistoryPlot
           id="anodes"
           title="Mean anode wastage"
-          chart={anodeChart}
+          chart={plots.anodes}
           note={
             projection ? (
               <p data-projection={projection.date}>
@@ -107,7 +89,7 @@ export default async function TankHistoryPage({ params }: { params: Promise<{ ve
         <HistoryPlot
           id="sediment"
           title="Sediment volume"
-          chart={sedimentChart}
+          chart={plots.sediment}
           head={["Date", "Volume", "Zones"]}
           rows={h.sediment.map((p) => [p.date, `${fmt(p.volumeM3, 2)} m³`, p.zones])}
         />
