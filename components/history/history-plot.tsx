@@ -1,14 +1,15 @@
 import type { ReactNode } from "react";
 import { Cell, Table } from "@/components/ui/table";
 import type { TChartLayout } from "@/lib/office/history-chart";
+import { HistoryChart } from "./history-chart";
 import { LineChartSvg } from "./line-chart-svg";
 
-/** A plot with its data as a table underneath, for those who would rather read the numbers. */
+/** A plot (recharts in the browser over the static SVG) with its data as a table underneath, for those who would rather read the numbers. */
 export function HistoryPlot({ id, title, chart, note, head, rows }: { id: string; title: string; chart: TChartLayout; note?: ReactNode; head: string[]; rows: (string | number)[][] }) {
   return (
     <section aria-labelledby={id} className="rounded-lg border border-slate-200 bg-white p-4" data-plot={id}>
       <h2 id={id} className="mb-2 text-lg font-semibold text-hull-900">{title}</h2>
-      {chart.empty ? <p className="text-sm text-slate-600">No signed measurements yet.</p> : <LineChartSvg chart={chart} />}
+      {chart.empty ? <p className="text-sm text-slate-600">No signed measurements yet.</p> : <HistoryChart chart={chart}><LineChartSvg chart={chart} /></HistoryChart>}
       {note ? <div className="mt-2 text-sm">{note}</div> : null}
       {rows.length ? (
         <details className="mt-3" open>
