@@ -26,3 +26,12 @@ export function reportFileName(v: { vesselName: string; tankCode: string; revisi
   const clean = (s: string) => s.normalize("NFKD").replace(/[^A-Za-z0-9]+/g, "-").replace(/^-|-$/g, "");
   return `TW-${clean(v.vesselName)}-${clean(v.tankCode)}-rev${v.revision}${v.draft ? "-draft" : ""}.pdf`;
 }
+
+/**
+ * A money amount in its currency ("$1,054.00", "¥3,250"): the currency's minor
+ * unit at least; a unit rate may carry up to four decimals ("$4.125").
+ */
+export function formatMoney(amount: number, currency: string, { rate = false }: { rate?: boolean } = {}): string {
+  const minor = new Intl.NumberFormat("en", { style: "currency", currency }).resolvedOptions().maximumFractionDigits ?? 2;
+  return new Intl.NumberFormat("en", { style: "currency", currency, minimumFractionDigits: minor, maximumFractionDigits: rate ? Math.max(minor, 4) : minor }).format(amount);
+}

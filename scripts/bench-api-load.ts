@@ -202,17 +202,19 @@ table(
 const workList = endpoints.find((e) => e.path.startsWith("/api/v1/dockings/"))!;
 const sequential: number[] = [];
 let workListItems = 0;
+let workListAll = 0;
 for (let i = 0; i < SERVER_TIME_REQUESTS; i++) {
   const t0 = performance.now();
   const res = await fetch(baseUrl + workList.path, { headers: { cookie } });
-  const body = (await res.json()) as { workList?: { items?: unknown[] } };
+  const body = (await res.json()) as { workList?: { items?: unknown[] }; paging?: { matching: number } };
   sequential.push(performance.now() - t0);
   workListItems = body.workList?.items?.length ?? 0;
+  workListAll = body.paging?.matching ?? workListItems;
 }
 sequential.sort((a, b) => a - b);
 console.log("");
 console.log(
-  `Work list server time (${SERVER_TIME_REQUESTS} sequential requests, ${workListItems} items): median ${ms(percentile(sequential, 50))} ms, min ${ms(sequential[0]!)} ms, max ${ms(sequential[sequential.length - 1]!)} ms`,
+  `Work list server time (${SERVER_TIME_REQUESTS} sequential requests, a page of ${workListItems} of ${workListAll} items, totals over all): median ${ms(percentile(sequential, 50))} ms, min ${ms(sequential[0]!)} ms, max ${ms(sequential[sequential.length - 1]!)} ms`,
 );
 
 console.log("");

@@ -31,10 +31,11 @@ cd "$ROOT"
 ensure_node_modules
 require_free_port "$APP_PORT" TANKWRIGHT_BENCH_APP_PORT
 # fsync off: this cluster holds only throwaway benchmark data.
-# auto_explain is loaded switched off; scripts/bench-api-load.ts switches it on for a
-# few requests after the load to log the plans of the queries the app really ran.
+# auto_explain is loaded switched off (its default log_min_duration -1; not set here,
+# since a command-line setting would outrank the ALTER SYSTEM that
+# scripts/bench-api-load.ts uses to switch it on for a few requests after the load).
 ensure_cluster "$PG_DATA" "$PG_PORT" "-c fsync=off -c synchronous_commit=off -c full_page_writes=off \
-  -c shared_preload_libraries=auto_explain -c auto_explain.log_min_duration=-1 -c auto_explain.log_analyze=on \
+  -c shared_preload_libraries=auto_explain -c auto_explain.log_analyze=on \
   -c auto_explain.log_buffers=on -c auto_explain.log_format=json"
 recreate_database "$PG_PORT" tankwright_bench
 export DATABASE_URL="postgres://postgres@127.0.0.1:$PG_PORT/tankwright_bench"

@@ -4,6 +4,7 @@ import { useState } from "react";
 import { Button } from "@/components/ui/button";
 import { Notice } from "@/components/ui/notice";
 import { Cell, Table } from "@/components/ui/table";
+import { formatMoney } from "@/lib/format";
 import { WORK_KIND_LABELS, WORK_KINDS, WORK_UNITS, type TWorkKind } from "@/lib/office/work-list";
 
 export type TWorkListItemView = {
@@ -42,7 +43,7 @@ export function WorkListEditor({ dockingId, viewQuery, itemsNote, locked, inProg
   const [draft, setDraft] = useState<TDraft>({ included: true, adjustedQuantity: "", adjustmentReason: "" });
   const [message, setMessage] = useState<{ tone: "error" | "success"; text: string } | null>(null);
   const [busy, setBusy] = useState(false);
-  const money = (n: number) => new Intl.NumberFormat("en", { style: "currency", currency: list.currency, minimumFractionDigits: list.minorUnits, maximumFractionDigits: list.minorUnits }).format(n);
+  const money = (n: number) => formatMoney(n, list.currency);
 
   async function send(url: string, init: RequestInit, done: string) {
     setBusy(true);
@@ -125,7 +126,7 @@ export function WorkListEditor({ dockingId, viewQuery, itemsNote, locked, inProg
                 {quantityText(i.quantityPriced)} {i.unit}
                 {i.adjustedQuantity !== null ? <span className="block text-xs text-slate-600">gathered {quantityText(i.quantity)}</span> : null}
               </Cell>
-              <Cell className="whitespace-nowrap text-right">{money(i.unitRate)}</Cell>
+              <Cell className="whitespace-nowrap text-right">{formatMoney(i.unitRate, list.currency, { rate: true })}</Cell>
               <Cell className="whitespace-nowrap text-right">{money(i.cost)}</Cell>
               <Cell>
                 {inProgress && i.included ? (

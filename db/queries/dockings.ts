@@ -44,6 +44,8 @@ const itemColumns = {
   doneAt: dockingItems.doneAt,
 };
 export type TDockingItemRow = Awaited<ReturnType<typeof listDockingItems>>[number];
+/** The list's order: tank code, then kind (steel, coating, anodes, sediment), then description. */
+const itemOrder = [asc(tanks.code), asc(dockingItems.kind), asc(dockingItems.description), asc(dockingItems.id)];
 
 /** The key that identifies an item across rebuilds: finding and kind, or tank and kind (the key of lib/office/work-list.ts). */
 export const itemKey = (i: { findingId: string | null; tankId: string | null; kind: string }) => `${i.findingId ?? i.tankId ?? "none"}:${i.kind}`;
@@ -73,16 +75,48 @@ export async function listDockingItems(scope: TDockingScope) {
     .from(dockingItems)
     .leftJoin(tanks, and(eq(tanks.orgId, dockingItems.orgId), eq(tanks.id, dockingItems.tankId)))
     .where(and(eq(dockingItems.orgId, scope.orgId), eq(dockingItems.dockingId, scope.dockingId)))
-    .orderBy(asc(tanks.code), asc(dockingItems.kind), asc(dockingItems.description));
+    .orderBy(...itemOrder);
 }
 
-/** Each tank's latest countersigned inspection of the vessel (tank_latest_inspections), by tank code. */
-export async function listLatestInspections(scope: TVesselScope) {
+/** One page of a docking's items, optionally one tank's, in the list's order; and how many there are in all. */
+export async function listDockingItemsPage(scope: TDockingScope & { tankId?: string; limit: number; offset: number }) {
+  const where = and(eq(dockingItems.orgId, scope.orgId), eq(dockingItems.dockingId, scope.dockingId), scope.tankId ? eq(dockingItems.tankId, scope.tankId) : undefined);
+  const [rows, matching] = await Promise.all([
+    db()
+      .select(itemColumns)
+      .from(dockingItems)
+      .leftJoin(tanks, and(eq(tanks.orgId, dockingItems.orgId), eq(tanks.id, dockingItems.tankId)))
+      .where(where)
+      .orderBy(...itemOrder)
+      .limit(scope.limit)
+      .offset(scope.offset),
+    db().$count(dockingItems, where),
+  ]);
+  return { rows, matching };
+}
+
+/** Per kind: the quantity priced (the adjusted one where there is one) summed over included items, and the item counts. */
+export async function sumDockingItems(scope: TDockingScope) {
+  const res = await db().execute<{ kind: string; quantity: string | null; included: number; excluded: number; adjusted: number }>(sql`
+    select kind,
+           sum(coalesce(adjusted_quantity, quantity)) filter (where included) as quantity,
+           count(*) filter (where included)::int as included,
+           count(*) filter (where not included)::int as excluded,
+           count(*) filter (where adjusted_quantity is not null)::int as adjusted
+    from docking_items
+    where org_id = ${scope.orgId}::uuid and docking_id = ${scope.dockingId}::uuid
+    group by kind`);
+  return res.rows.map((r) => ({ kind: r.kind, quantity: r.quantity === null ? 0 : Number(r.quantity), included: Number(r.included), excluded: Number(r.excluded), adjusted: Number(r.adjusted) }));
+}
+
+/** Each tank's latest countersigned inspection of the docking's vessel (tank_latest_inspections), by tank code. */
+export async function listLatestInspectionsOfDocking(scope: TDockingScope) {
   return db()
     .select({ tankId: tankLatestInspections.tankId, tankCode: tanks.code, inspectionId: tankLatestInspections.inspectionId, inspectedOn: tankLatestInspections.inspectedOn })
     .from(tankLatestInspections)
+    .innerJoin(dockings, and(eq(dockings.orgId, tankLatestInspections.orgId), eq(dockings.vesselId, tankLatestInspections.vesselId)))
     .innerJoin(tanks, and(eq(tanks.orgId, tankLatestInspections.orgId), eq(tanks.id, tankLatestInspections.tankId)))
-    .where(and(eq(tankLatestInspections.orgId, scope.orgId), eq(tankLatestInspections.vesselId, scope.vesselId)))
+    .where(and(eq(tankLatestInspections.orgId, scope.orgId), eq(dockings.id, scope.dockingId)))
     .orderBy(asc(tanks.code));
 }
 

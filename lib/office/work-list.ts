@@ -159,6 +159,33 @@ export function roundMoney(amount: number, digits: number): number {
   return rounded === 0 ? 0 : rounded;
 }
 
+/** Over the included items of one kind: the quantity priced, summed; and how many items are included and excluded. */
+export type TKindSum = { quantity: number; included: number; excluded: number };
+
+function checkRates(rates: TDockingRates): { path: string; message: string }[] {
+  return WORK_KINDS.flatMap((kind) => {
+    const rate = rates[RATE_OF[kind]];
+    return !Number.isFinite(rate) || rate < 0 ? [{ path: RATE_OF[kind], message: "must be a number, 0 or more" }] : [];
+  });
+}
+
+/**
+ * The totals of a work list from each kind's summed quantity: cost per kind
+ * and grand total, each rounded once from the exact amount (quantity × rate).
+ * priceWorkList uses it over its items; a server reading a long list sums the
+ * quantities in the database and prices only the page it shows.
+ */
+export function priceKindSums(sums: Record<TWorkKind, TKindSum>, rates: TDockingRates, adjusted: number): Omit<TPricedWorkList<never>, "items"> {
+  const issues = checkRates(rates);
+  if (issues.length) throw new AppError("unprocessable", "The work list cannot be priced as it is.", issues);
+  const minorUnits = currencyMinorUnits(rates.currency);
+  const exact = Object.fromEntries(WORK_KINDS.map((k) => [k, sums[k].quantity * rates[RATE_OF[k]]])) as Record<TWorkKind, number>;
+  const totals = Object.fromEntries(WORK_KINDS.map((k) => [k, { ...sums[k], cost: roundMoney(exact[k], minorUnits) }])) as Record<TWorkKind, TKindTotal>;
+  const grandTotal = roundMoney(WORK_KINDS.reduce((sum, k) => sum + exact[k], 0), minorUnits);
+  const counts = { included: WORK_KINDS.reduce((n, k) => n + sums[k].included, 0), excluded: WORK_KINDS.reduce((n, k) => n + sums[k].excluded, 0), adjusted };
+  return { currency: rates.currency, minorUnits, totals, grandTotal, counts };
+}
+
 /**
  * Prices work items at the docking's rates. Each item may carry the
  * superintendent's decision; an adjusted quantity replaces the gathered one and
@@ -166,15 +193,10 @@ export function roundMoney(amount: number, digits: number): number {
  * an adjustment without a reason; the docking schema refuses them first.
  */
 export function priceWorkList<T extends { key: string; kind: TWorkKind; quantity: number } & TWorkItemDecision>(items: readonly T[], rates: TDockingRates): TPricedWorkList<T> {
-  const issues: { path: string; message: string }[] = [];
-  for (const kind of WORK_KINDS) {
-    const rate = rates[RATE_OF[kind]];
-    if (!Number.isFinite(rate) || rate < 0) issues.push({ path: RATE_OF[kind], message: "must be a number, 0 or more" });
-  }
+  const issues = checkRates(rates);
   const minorUnits = currencyMinorUnits(rates.currency);
-  const exact = { steel: 0, coating: 0, anodes: 0, sediment: 0 } satisfies Record<TWorkKind, number>;
-  const totals = Object.fromEntries(WORK_KINDS.map((k) => [k, { quantity: 0, cost: 0, included: 0, excluded: 0 }])) as Record<TWorkKind, TKindTotal>;
-  const counts = { included: 0, excluded: 0, adjusted: 0 };
+  const sums = Object.fromEntries(WORK_KINDS.map((k) => [k, { quantity: 0, included: 0, excluded: 0 }])) as Record<TWorkKind, TKindSum>;
+  let adjustedCount = 0;
   const priced = items.map((item) => {
     const included = item.included ?? true;
     const adjustedQuantity = item.adjustedQuantity ?? null;
@@ -183,25 +205,19 @@ export function priceWorkList<T extends { key: string; kind: TWorkKind; quantity
     if (adjustedQuantity !== null) {
       if (!Number.isFinite(adjustedQuantity) || adjustedQuantity < 0) issues.push({ path: `${item.key}.adjustedQuantity`, message: "must be a number, 0 or more" });
       if (!adjustmentReason) issues.push({ path: `${item.key}.adjustmentReason`, message: "is required: say why the quantity was changed" });
+      adjustedCount += 1;
     }
     const quantityPriced = adjustedQuantity ?? item.quantity;
     const unitRate = rates[RATE_OF[item.kind]];
-    const cost = quantityPriced * unitRate;
-    const total = totals[item.kind];
+    const sum = sums[item.kind];
     if (included) {
-      exact[item.kind] += cost;
-      total.quantity += quantityPriced;
-      total.included += 1;
-      counts.included += 1;
+      sum.quantity += quantityPriced;
+      sum.included += 1;
     } else {
-      total.excluded += 1;
-      counts.excluded += 1;
+      sum.excluded += 1;
     }
-    if (adjustedQuantity !== null) counts.adjusted += 1;
-    return { ...item, included, adjusted: adjustedQuantity !== null, adjustedQuantity, adjustmentReason, quantityPriced, unitRate, cost: roundMoney(cost, minorUnits) };
+    return { ...item, included, adjusted: adjustedQuantity !== null, adjustedQuantity, adjustmentReason, quantityPriced, unitRate, cost: roundMoney(quantityPriced * unitRate, minorUnits) };
   });
   if (issues.length) throw new AppError("unprocessable", "The work list cannot be priced as it is.", issues);
-  for (const k of WORK_KINDS) totals[k].cost = roundMoney(exact[k], minorUnits);
-  const grandTotal = roundMoney(WORK_KINDS.reduce((sum, k) => sum + exact[k], 0), minorUnits);
-  return { currency: rates.currency, minorUnits, items: priced, totals, grandTotal, counts };
+  return { ...priceKindSums(sums, rates, adjustedCount), items: priced };
 }

@@ -10,7 +10,7 @@ import { authorizeVessel } from "@/lib/auth/authorize";
 import { AppError, issuesFromZod } from "@/lib/errors";
 import { validateInput } from "@/lib/http/route";
 import { workListCsv } from "@/lib/office/work-list-csv";
-import { gatherWorkItems, priceWorkList, WORK_KINDS, type TWorkKind, type TWorkSource } from "@/lib/office/work-list";
+import { gatherWorkItems, priceKindSums, priceWorkList, WORK_KINDS, type TKindSum, type TWorkKind, type TWorkSource } from "@/lib/office/work-list";
 import { workListQueryFromParams, ZDockingDecisions, ZDockingDoneInput, ZDockingInput, ZDockingStatusInput, type TWorkListQuery } from "@/lib/schemas/docking";
 import { DOCKING_STATUS_LABELS, type TRole } from "@/lib/vocabulary";
 
@@ -76,22 +76,35 @@ const FIRST_PAGE: TWorkListQuery = { page: 1, pageSize: 100 };
  * cannot price (no quantities).
  */
 export async function getDockingAs(actor: TActor, dockingId: string, params: TWorkListQuery | URLSearchParams = FIRST_PAGE) {
-  const { orgId, vessel, docking, workList } = await readWorkListAs(actor, dockingId);
+  const { orgId, vessel } = await authorizeDocking(actor, dockingId);
   // Search params are read once the actor is known to be allowed in.
   const view = params instanceof URLSearchParams ? workListViewFromParams(params) : params;
-  const sources = await q.listLatestInspections({ orgId, vesselId: docking.vesselId });
+  const offset = (view.page - 1) * view.pageSize;
+  const [docking, sums, page, sources] = await Promise.all([
+    q.getDocking({ orgId, dockingId }),
+    q.sumDockingItems({ orgId, dockingId }),
+    q.listDockingItemsPage({ orgId, dockingId, tankId: view.tank, limit: view.pageSize, offset }),
+    q.listLatestInspectionsOfDocking({ orgId, dockingId }),
+  ]);
+  if (!docking) throw new AppError("not_found", "No such docking.");
+  // The totals from the database's sums; only the page's items are priced one by one.
+  const byKind = Object.fromEntries(WORK_KINDS.map((k) => [k, { quantity: 0, included: 0, excluded: 0 }])) as Record<TWorkKind, TKindSum>;
+  let adjusted = 0;
+  for (const s of sums) {
+    if (!isWorkKind(s.kind)) continue;
+    byKind[s.kind] = { quantity: s.quantity, included: s.included, excluded: s.excluded };
+    adjusted += s.adjusted;
+  }
+  const pageItems = page.rows.flatMap((r) => (isWorkKind(r.kind) ? [{ ...r, key: r.id, kind: r.kind }] : []));
   const candidates = await q.listOpenFindingsWithoutQuantities({ orgId, inspectionIds: sources.map((s) => s.inspectionId) });
   const unpriced = gatherWorkItems(
     sources.map((s) => ({ ...s, findings: candidates.filter((f) => f.inspectionId === s.inspectionId), anodes: null, sedimentZones: [] })),
   ).unpriced;
-  const matching = view.tank ? workList.items.filter((i) => i.tankId === view.tank) : workList.items;
-  const totalPages = Math.max(1, Math.ceil(matching.length / view.pageSize));
-  const start = (view.page - 1) * view.pageSize;
   return {
     vessel,
     docking,
-    workList: { ...workList, items: matching.slice(start, start + view.pageSize) },
-    paging: { page: view.page, pageSize: view.pageSize, tank: view.tank ?? null, matching: matching.length, totalPages },
+    workList: { ...priceKindSums(byKind, docking, adjusted), items: priceWorkList(pageItems, docking).items },
+    paging: { page: view.page, pageSize: view.pageSize, tank: view.tank ?? null, matching: page.matching, totalPages: Math.max(1, Math.ceil(page.matching / view.pageSize)) },
     unpriced,
     sources: sources.map((s) => ({ tankId: s.tankId, tankCode: s.tankCode, inspectionId: s.inspectionId, inspectedOn: s.inspectedOn })),
   };

@@ -66,7 +66,7 @@ describe("the docking work list from the demo data in Chromium", () => {
 
       // Only the countersigned report is a source; rates as typed.
       expect(await workList.sources().textContent()).toBe(
-        "Gathered from No. 2 DB WBT P (2026-05-12). Rates: steel 9.5/kg, coating 38/m², anodes 145/piece, sediment 60/m³.",
+        "Gathered from No. 2 DB WBT P (2026-05-12). Rates: steel $9.50/kg, coating $38.00/m², anodes $145.00/piece, sediment $60.00/m³.",
       );
 
       // Items, ordered by tank, then kind (steel, coating, anodes, sediment), then description.

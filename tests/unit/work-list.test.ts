@@ -4,7 +4,7 @@
 import { describe, expect, it } from "vitest";
 import { AppError } from "@/lib/errors";
 import { repairQuantities } from "@/lib/inspection/quantities";
-import { currencyMinorUnits, gatherWorkItems, priceWorkList, roundMoney, type TWorkSource, type TWorkSourceFinding } from "@/lib/office/work-list";
+import { currencyMinorUnits, gatherWorkItems, priceKindSums, priceWorkList, roundMoney, type TWorkSource, type TWorkSourceFinding } from "@/lib/office/work-list";
 import { ZDockingInput, ZDockingItemDecisionInput } from "@/lib/schemas/docking";
 
 const insert = repairQuantities({ kind: "insert_plate", lengthMm: 2500, widthMm: 1800, thicknessMm: 14, pieces: 1 });
@@ -113,6 +113,22 @@ describe("pricing (rates of this test: steel 4.50 USD/kg, coating 85 USD/m², an
     expect(list.grandTotal).toBe(7341.78); // 2 425.275 + 1 436.50 + 720 + 2 760 = 7 341.775 → 7 341.78
     expect(list.counts).toEqual({ included: 6, excluded: 0, adjusted: 0 });
     expect(list).toMatchObject({ currency: "USD", minorUnits: 2 });
+  });
+
+  it("totals from per-kind sums (as the database sums a long list) equal the totals of the items", () => {
+    // The same list as above, summed by kind: steel 494.55 + 44.4 = 538.95 kg, coating 4.5 + 12.4 = 16.9 m², 6 anodes, 46 m³.
+    const sums = {
+      steel: { quantity: 538.95, included: 2, excluded: 0 },
+      coating: { quantity: 16.9, included: 2, excluded: 0 },
+      anodes: { quantity: 6, included: 1, excluded: 0 },
+      sediment: { quantity: 46, included: 1, excluded: 0 },
+    };
+    const fromSums = priceKindSums(sums, usd, 0);
+    expect(fromSums.totals.steel.cost).toBe(2425.28); // 538.95 × 4.50 = 2 425.275 → 2 425.28
+    expect(fromSums.grandTotal).toBe(7341.78); // 2 425.275 + 1 436.50 + 720 + 2 760 = 7 341.775 → 7 341.78
+    const { items: _items, ...fromItems } = priceWorkList(items, usd);
+    expect(fromSums).toEqual({ ...fromItems, totals: Object.fromEntries(Object.entries(fromItems.totals).map(([k, t]) => [k, { ...t, quantity: sums[k as keyof typeof sums].quantity }])) });
+    expect(() => priceKindSums(sums, { ...usd, coatingRatePerM2: -5 }, 0)).toThrow(AppError);
   });
 
   it("an excluded item keeps its cost on its line but leaves the totals; an adjusted quantity replaces the gathered one", () => {

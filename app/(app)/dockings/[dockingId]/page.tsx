@@ -6,6 +6,7 @@ import { Notice } from "@/components/ui/notice";
 import { PageHeader } from "@/components/ui/page-header";
 import { Pager } from "@/components/ui/pager";
 import { pageActor, pageAuthorize } from "@/lib/auth/page";
+import { formatMoney } from "@/lib/format";
 import { workListQueryFromParams } from "@/lib/schemas/docking";
 import { getDockingAs } from "@/lib/services/dockings";
 import { DOCKING_STATUS_LABELS } from "@/lib/vocabulary";
@@ -29,6 +30,7 @@ export default async function WorkListPage({ params, searchParams }: { params: P
     return t ? `/dockings/${docking.id}?${t}` : `/dockings/${docking.id}`;
   };
   const viewQuery = hrefFor(paging.page).split("?")[1] ?? "";
+  const rate = (n: number) => formatMoney(n, docking.currency, { rate: true });
   const locked = docking.status === "completed" || docking.status === "cancelled";
   return (
     <>
@@ -44,7 +46,7 @@ export default async function WorkListPage({ params, searchParams }: { params: P
         {asked.success ? null : <Notice tone="error" title="This page of the work list cannot be shown">{asked.error.issues.map((i) => i.message).join("; ")}. Showing the first page.</Notice>}
         {locked ? <Notice tone="caution">This docking is {DOCKING_STATUS_LABELS[docking.status].toLowerCase()}: its work list can no longer be changed.</Notice> : null}
         <p className="text-sm text-slate-700">
-          Gathered from {sources.length ? sources.map((s) => `${s.tankCode} (${s.inspectedOn})`).join(", ") : "no countersigned report yet"}. Rates: steel {docking.steelRatePerKg}/kg, coating {docking.coatingRatePerM2}/m², anodes {docking.anodeRatePerPiece}/piece, sediment {docking.sedimentRatePerM3}/m³.
+          Gathered from {sources.length ? sources.map((s) => `${s.tankCode} (${s.inspectedOn})`).join(", ") : "no countersigned report yet"}. Rates: steel {rate(docking.steelRatePerKg)}/kg, coating {rate(docking.coatingRatePerM2)}/m², anodes {rate(docking.anodeRatePerPiece)}/piece, sediment {rate(docking.sedimentRatePerM3)}/m³.
         </p>
         <DockingStatusActions dockingId={docking.id} status={docking.status} />
         <form method="get" action={`/dockings/${docking.id}`} className="flex flex-wrap items-end gap-2 text-sm" aria-label="Show the items of one tank">
@@ -59,6 +61,7 @@ export default async function WorkListPage({ params, searchParams }: { params: P
           </label>
           <button type="submit" className="rounded-md border border-slate-300 bg-white px-3 py-1 font-semibold text-slate-800 hover:bg-slate-50">Show</button>
         </form>
+        <Pager noun="Items" page={paging.page} totalPages={paging.totalPages} matching={paging.matching} pageSize={paging.pageSize} hrefFor={(page) => hrefFor(page)} />
         <WorkListEditor
           key={`${docking.status}:${viewQuery}`}
           dockingId={docking.id}
@@ -77,7 +80,6 @@ export default async function WorkListPage({ params, searchParams }: { params: P
             })),
           }}
         />
-        <Pager noun="Items" page={paging.page} totalPages={paging.totalPages} matching={paging.matching} pageSize={paging.pageSize} hrefFor={(page) => hrefFor(page)} />
         {unpriced.length ? (
           <Notice tone="caution" title="Open findings the yard cannot price">
             These open findings have no steel or coating quantity (monitor only, or not measured): {unpriced.map((u) => `${u.tankCode}: ${u.description}`).join("; ")}.
