@@ -40,15 +40,22 @@ export function sameDefectPlace(a: TRecurringFinding, b: TRecurringFinding): boo
  * inspection never mark each other.
  */
 export function markRecurring(findings: readonly TRecurringFinding[]): Map<string, string> {
-  const ordered = [...findings].sort((a, b) => a.inspectedOn.localeCompare(b.inspectedOn));
+  // Only findings of the same tank, type and member can repeat each other: compare within those groups.
+  const groups = new Map<string, TRecurringFinding[]>();
+  for (const f of findings) {
+    const key = [f.tankId, f.type, f.memberKind, f.memberNumber ?? "", f.platingRegion ?? ""].join("|");
+    groups.set(key, [...(groups.get(key) ?? []), f]);
+  }
   const marks = new Map<string, string>();
-  for (const f of ordered) {
-    let earlier: TRecurringFinding | null = null;
-    for (const e of ordered) {
-      if (e.inspectedOn >= f.inspectedOn || e.inspectionId === f.inspectionId) continue;
-      if (sameDefectPlace(e, f) && (!earlier || e.inspectedOn >= earlier.inspectedOn)) earlier = e;
+  for (const group of groups.values()) {
+    for (const f of group) {
+      let earlier: TRecurringFinding | null = null;
+      for (const e of group) {
+        if (e.inspectedOn >= f.inspectedOn || e.inspectionId === f.inspectionId) continue;
+        if (sameDefectPlace(e, f) && (!earlier || e.inspectedOn >= earlier.inspectedOn)) earlier = e;
+      }
+      if (earlier) marks.set(f.id, earlier.id);
     }
-    if (earlier) marks.set(f.id, earlier.id);
   }
   return marks;
 }
