@@ -815,9 +815,19 @@ export const dockingItems = pgTable(
     included: boolean("included").notNull().default(true),
     adjustmentReason: text("adjustment_reason"),
     doneAt: timestamp("done_at", { withTimezone: true }),
+    // Hand-added ("other") items only: their own price per unit in the docking's
+    // currency, why they were added and by whom. Gathered items are priced at the
+    // docking's rates and carry none of these.
+    unitRate: numeric("unit_rate", { precision: 14, scale: 4, mode: "number" }),
+    addedReason: text("added_reason"),
+    addedBy: uuid("added_by").references(() => users.id, { onDelete: "set null" }),
     createdAt: createdAt(),
   },
-  (t) => [index("docking_items_docking_idx").on(t.orgId, t.dockingId)],
+  (t) => [
+    index("docking_items_docking_idx").on(t.orgId, t.dockingId),
+    check("docking_items_own_rate_only_other", sql`(${t.kind} = 'other') = (${t.unitRate} is not null)`),
+    check("docking_items_other_has_reason", sql`${t.kind} <> 'other' or ${t.addedReason} is not null`),
+  ],
 );
 
 /** Responses of writes that carried an Idempotency-Key, so that a retried request is answered, not repeated. */
