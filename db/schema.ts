@@ -110,6 +110,8 @@ export const users = pgTable(
     lockedUntil: timestamp("locked_until", { withTimezone: true }),
     lastSignInAt: timestamp("last_sign_in_at", { withTimezone: true }),
     disabledAt: timestamp("disabled_at", { withTimezone: true }),
+    /** When the password was last set by a reset or a chosen password: sessions signed in before it are no longer accepted. */
+    passwordChangedAt: timestamp("password_changed_at", { withTimezone: true }),
     createdAt: createdAt(),
     updatedAt: updatedAt(),
   },
