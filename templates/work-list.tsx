@@ -1,7 +1,9 @@
 // The docking work list as a PDF: docking particulars and rates, one row per
 // item (tank, work, quantity, unit rate, cost; excluded items struck through
-// with their reason), totals per kind and the grand total. Every figure comes
-// priced from lib/office/work-list.ts; nothing is computed here.
+// with their reason; work added by hand with its own rate and why it was
+// added), totals per kind (hand-added work: no quantity, mixed units) and the
+// grand total. Every figure comes priced from lib/office/work-list.ts; nothing
+// is computed here.
 import { Document, Page, StyleSheet, Text, View } from "@react-pdf/renderer";
 import { WORK_KIND_LABELS, WORK_KINDS, WORK_UNITS, type TPricedWorkList, type TWorkKind } from "@/lib/office/work-list";
 import { PDF_FONT_FAMILY } from "./fonts";
@@ -24,7 +26,7 @@ const s = StyleSheet.create({
   grand: { flexDirection: "row", paddingVertical: 3, fontWeight: 700, fontSize: 10 },
 });
 
-export type TWorkListPdfItem = { tankCode: string | null; kind: TWorkKind; description: string; unit: string; quantity: number };
+export type TWorkListPdfItem = { tankCode: string | null; kind: TWorkKind; description: string; unit: string; quantity: number; addedReason?: string | null; addedByName?: string | null };
 
 export function WorkListDocument<T extends TWorkListPdfItem>({ list, head }: { list: TPricedWorkList<T>; head: { vesselName: string; imoNumber: string; yard: string; place: string; plannedOn: string; status: string; preparedAt: string } }) {
   const money = (n: number) => `${n.toFixed(list.minorUnits)} ${list.currency}`;
@@ -48,6 +50,7 @@ export function WorkListDocument<T extends TWorkListPdfItem>({ list, head }: { l
             <Text style={s.tank}>{i.tankCode ?? "—"}</Text>
             <View style={s.work}>
               <Text style={i.included ? {} : s.excluded}>{i.description}{i.included ? "" : " (excluded)"}</Text>
+              {i.kind === "other" ? <Text style={s.reason}>Added by hand{i.addedByName ? ` by ${i.addedByName}` : ""}: {i.addedReason ?? ""}</Text> : null}
               {i.adjustmentReason ? <Text style={s.reason}>Reason: {i.adjustmentReason}{i.adjustedQuantity !== null ? ` (gathered ${qty(i.quantity, i.unit)})` : ""}</Text> : null}
             </View>
             <Text style={s.num}>{qty(i.quantityPriced, i.unit)}</Text>
@@ -59,7 +62,7 @@ export function WorkListDocument<T extends TWorkListPdfItem>({ list, head }: { l
         {WORK_KINDS.map((k) => (
           <View key={k} style={s.row} wrap={false}>
             <Text style={s.work}>{WORK_KIND_LABELS[k]}: {list.totals[k].included} included, {list.totals[k].excluded} excluded</Text>
-            <Text style={s.num}>{qty(list.totals[k].quantity, WORK_UNITS[k])}</Text>
+            <Text style={s.num}>{k === "other" || list.totals[k].quantity === null ? "—" : qty(list.totals[k].quantity, WORK_UNITS[k])}</Text>
             <Text style={s.num}>{money(list.totals[k].cost)}</Text>
           </View>
         ))}

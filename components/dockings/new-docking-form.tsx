@@ -22,11 +22,24 @@ const FIELDS = [
 ] as const;
 
 const EMPTY = Object.fromEntries(FIELDS.map((f) => [f.name, ""])) as TDraft;
+const RATE_FIELDS = ["steelRatePerKg", "coatingRatePerM2", "anodeRatePerPiece", "sedimentRatePerM3"] as const;
 
-/** Plans a docking: checked in the browser with the server's schema, then created and gathered by the API. */
-export function NewDockingForm({ vesselId }: { vesselId: string }) {
+/** The company's most recent docking, whose currency and rates a new docking starts from. */
+export type TRatesSource = { vesselName: string; yard: string; plannedOn: string; currency: string } & Record<(typeof RATE_FIELDS)[number], number>;
+
+function startingDraft(from: TRatesSource | null): TDraft {
+  if (!from) return EMPTY;
+  return { ...EMPTY, currency: from.currency, ...(Object.fromEntries(RATE_FIELDS.map((k) => [k, String(from[k])])) as Record<(typeof RATE_FIELDS)[number], string>) };
+}
+
+/**
+ * Plans a docking: checked in the browser with the server's schema, then
+ * created and gathered by the API. The currency and rates start from the
+ * company's most recent docking, and say so; the rates are empty without one.
+ */
+export function NewDockingForm({ vesselId, ratesFrom }: { vesselId: string; ratesFrom: TRatesSource | null }) {
   const router = useRouter();
-  const [draft, setDraft] = useState<TDraft>({ ...EMPTY, currency: "USD" });
+  const [draft, setDraft] = useState<TDraft>(() => startingDraft(ratesFrom));
   const [errors, setErrors] = useState<Partial<Record<keyof TDraft, string>>>({});
   const [message, setMessage] = useState<string | null>(null);
   const [busy, setBusy] = useState(false);
@@ -59,6 +72,13 @@ export function NewDockingForm({ vesselId }: { vesselId: string }) {
   return (
     <form onSubmit={submit} noValidate className="space-y-4 rounded-lg border border-slate-200 bg-white p-4">
       {message ? <Notice tone="error">{message}</Notice> : null}
+      {ratesFrom ? (
+        <p className="text-sm text-slate-700" data-testid="rates-from">
+          Currency and rates from the docking at {ratesFrom.yard}, {ratesFrom.plannedOn} ({ratesFrom.vesselName}). Change them to this yard&apos;s quotation.
+        </p>
+      ) : (
+        <p className="text-sm text-slate-700" data-testid="rates-from">No earlier docking in the company: enter this yard&apos;s rates.</p>
+      )}
       <div className="grid gap-4 sm:grid-cols-2">
         {FIELDS.map((f) => (
           <TextField

@@ -1,10 +1,10 @@
 import "server-only";
-import { and, asc, desc, eq, inArray, sql } from "drizzle-orm";
+import { and, asc, desc, eq, inArray, ne, sql } from "drizzle-orm";
 import { db } from "@/db";
-import { anodeRecords, dockingItems, dockings, findings, inspections, sedimentZones, tankLatestInspections, tanks } from "@/db/schema";
+import { anodeRecords, dockingItems, dockings, findings, sedimentZones, tankLatestInspections, tanks, users, vessels } from "@/db/schema";
 import type { TWriter } from "@/db/seed/builders";
 import type { TWorkItem, TWorkSource } from "@/lib/office/work-list";
-import type { TDockingInput } from "@/lib/schemas/docking";
+import type { TDockingInput, TDockingOtherItemInput } from "@/lib/schemas/docking";
 import type { TDockingStatus } from "@/lib/vocabulary";
 import { writeAudit } from "./audit";
 
@@ -42,9 +42,13 @@ const itemColumns = {
   included: dockingItems.included,
   adjustmentReason: dockingItems.adjustmentReason,
   doneAt: dockingItems.doneAt,
+  /** Hand-added ("other") items only: their own rate, why and by whom they were added. */
+  unitRate: dockingItems.unitRate,
+  addedReason: dockingItems.addedReason,
+  addedByName: users.name,
 };
 export type TDockingItemRow = Awaited<ReturnType<typeof listDockingItems>>[number];
-/** The list's order: tank code, then kind (steel, coating, anodes, sediment), then description. */
+/** The list's order: tank code (items of no tank last), then kind (steel, coating, anodes, sediment, other), then description. */
 const itemOrder = [asc(tanks.code), asc(dockingItems.kind), asc(dockingItems.description), asc(dockingItems.id)];
 
 /** The key that identifies an item across rebuilds: finding and kind, or tank and kind (the key of lib/office/work-list.ts). */
@@ -74,6 +78,7 @@ export async function listDockingItems(scope: TDockingScope) {
     .select(itemColumns)
     .from(dockingItems)
     .leftJoin(tanks, and(eq(tanks.orgId, dockingItems.orgId), eq(tanks.id, dockingItems.tankId)))
+    .leftJoin(users, eq(users.id, dockingItems.addedBy))
     .where(and(eq(dockingItems.orgId, scope.orgId), eq(dockingItems.dockingId, scope.dockingId)))
     .orderBy(...itemOrder);
 }
@@ -86,6 +91,7 @@ export async function listDockingItemsPage(scope: TDockingScope & { tankId?: str
       .select(itemColumns)
       .from(dockingItems)
       .leftJoin(tanks, and(eq(tanks.orgId, dockingItems.orgId), eq(tanks.id, dockingItems.tankId)))
+      .leftJoin(users, eq(users.id, dockingItems.addedBy))
       .where(where)
       .orderBy(...itemOrder)
       .limit(scope.limit)
@@ -95,18 +101,31 @@ export async function listDockingItemsPage(scope: TDockingScope & { tankId?: str
   return { rows, matching };
 }
 
-/** Per kind: the quantity priced (the adjusted one where there is one) summed over included items, and the item counts. */
+/**
+ * Per kind, over included items: the quantity priced (the adjusted one where
+ * there is one) summed, and the exact cost of items priced at their own rate
+ * (hand-added work: Σ quantity priced × unit_rate, in numeric, unrounded);
+ * and the item counts.
+ */
 export async function sumDockingItems(scope: TDockingScope) {
-  const res = await db().execute<{ kind: string; quantity: string | null; included: number; excluded: number; adjusted: number }>(sql`
+  const res = await db().execute<{ kind: string; quantity: string | null; cost: string | null; included: number; excluded: number; adjusted: number }>(sql`
     select kind,
            sum(coalesce(adjusted_quantity, quantity)) filter (where included) as quantity,
+           sum(coalesce(adjusted_quantity, quantity) * unit_rate) filter (where included) as cost,
            count(*) filter (where included)::int as included,
            count(*) filter (where not included)::int as excluded,
            count(*) filter (where adjusted_quantity is not null)::int as adjusted
     from docking_items
     where org_id = ${scope.orgId}::uuid and docking_id = ${scope.dockingId}::uuid
     group by kind`);
-  return res.rows.map((r) => ({ kind: r.kind, quantity: r.quantity === null ? 0 : Number(r.quantity), included: Number(r.included), excluded: Number(r.excluded), adjusted: Number(r.adjusted) }));
+  return res.rows.map((r) => ({
+    kind: r.kind,
+    quantity: r.quantity === null ? 0 : Number(r.quantity),
+    cost: r.cost === null ? 0 : Number(r.cost),
+    included: Number(r.included),
+    excluded: Number(r.excluded),
+    adjusted: Number(r.adjusted),
+  }));
 }
 
 /** Each tank's latest countersigned inspection of the docking's vessel (tank_latest_inspections), by tank code. */
@@ -182,13 +201,17 @@ export async function listWorkSources(scope: TVesselScope, w: TWriter = db()): P
 }
 
 /**
- * Brings the docking's items in line with the gathered work: new items are
- * added, gathered quantities and descriptions refreshed, items no longer asked
- * for removed. Decisions (included, adjusted quantity, reason) stay with their
- * item. Runs inside the caller's transaction; returns what changed.
+ * Brings the docking's gathered items in line with the gathered work: new
+ * items are added, gathered quantities and descriptions refreshed, items no
+ * longer asked for removed. Decisions (included, adjusted quantity, reason)
+ * stay with their item. Items added by hand ("other") are not gathered and are
+ * left as they are. Runs inside the caller's transaction; returns what changed.
  */
 async function syncItems(w: TWriter, v: TDockingScope, work: readonly TWorkItem[]) {
-  const existing = await w.select().from(dockingItems).where(and(eq(dockingItems.orgId, v.orgId), eq(dockingItems.dockingId, v.dockingId)));
+  const existing = await w
+    .select()
+    .from(dockingItems)
+    .where(and(eq(dockingItems.orgId, v.orgId), eq(dockingItems.dockingId, v.dockingId), ne(dockingItems.kind, "other")));
   const byKey = new Map(existing.map((e) => [itemKey(e), e]));
   const wanted = new Set(work.map((i) => `${i.findingId ?? i.tankId}:${i.kind}`));
   let added = 0;
@@ -230,12 +253,112 @@ export async function rebuildDocking(v: TDockingScope & { actorUserId: string; g
   return db().transaction(async (tx) => {
     const docking = await lockDocking(tx, v);
     if (!docking) return null;
-    if (docking.status === "completed" || docking.status === "cancelled") return { locked: docking.status } as const;
+    if (isLocked(docking.status)) return { locked: docking.status } as const;
     const changes = await syncItems(tx, v, v.gather(await listWorkSources({ orgId: v.orgId, vesselId: docking.vesselId }, tx)));
     await tx.update(dockings).set({ updatedAt: new Date() }).where(and(eq(dockings.orgId, v.orgId), eq(dockings.id, v.dockingId)));
     await writeAudit(tx, { orgId: v.orgId, actorUserId: v.actorUserId, action: "docking.rebuild", entity: "docking", entityId: v.dockingId, detail: changes });
     return { changes } as const;
   });
+}
+
+const isLocked = (status: TDockingStatus) => status === "completed" || status === "cancelled";
+
+/**
+ * Adds a hand-added ("other") item to the docking, audit-logged. Returns
+ * "locked" for a completed or cancelled docking, "foreignTank" when the tank
+ * is not one of the docking's vessel (nothing is written then), null for no
+ * such docking.
+ */
+export async function addOtherItem(v: TDockingScope & { actorUserId: string; input: TDockingOtherItemInput }) {
+  return db().transaction(async (tx) => {
+    const docking = await lockDocking(tx, v);
+    if (!docking) return null;
+    if (isLocked(docking.status)) return { locked: docking.status } as const;
+    const { tankId, description, quantity, unit, unitRate, reason } = v.input;
+    if (tankId) {
+      const [tank] = await tx.select({ id: tanks.id }).from(tanks).where(and(eq(tanks.orgId, v.orgId), eq(tanks.vesselId, docking.vesselId), eq(tanks.id, tankId)));
+      if (!tank) return { foreignTank: tankId } as const;
+    }
+    const [row] = await tx
+      .insert(dockingItems)
+      .values({ orgId: v.orgId, dockingId: v.dockingId, tankId: tankId ?? null, findingId: null, kind: "other", description, quantity, unit, unitRate, addedReason: reason, addedBy: v.actorUserId })
+      .returning({ id: dockingItems.id });
+    await tx.update(dockings).set({ updatedAt: new Date() }).where(and(eq(dockings.orgId, v.orgId), eq(dockings.id, v.dockingId)));
+    await writeAudit(tx, {
+      orgId: v.orgId,
+      actorUserId: v.actorUserId,
+      action: "docking_item.add",
+      entity: "docking_item",
+      entityId: row!.id,
+      detail: { dockingId: v.dockingId, tankId: tankId ?? null, description, quantity, unit, unitRate, reason },
+    });
+    return { itemId: row!.id } as const;
+  });
+}
+
+/**
+ * Removes a hand-added item, audit-logged with what it was. Returns "locked"
+ * for a completed or cancelled docking, "gathered" for an item gathered from a
+ * report (it is excluded instead), "unknown" for an id that is not an item of
+ * this docking, null for no such docking.
+ */
+export async function removeOtherItem(v: TDockingScope & { actorUserId: string; itemId: string }) {
+  return db().transaction(async (tx) => {
+    const docking = await lockDocking(tx, v);
+    if (!docking) return null;
+    if (isLocked(docking.status)) return { locked: docking.status } as const;
+    const [item] = await tx.select().from(dockingItems).where(and(eq(dockingItems.orgId, v.orgId), eq(dockingItems.dockingId, v.dockingId), eq(dockingItems.id, v.itemId)));
+    if (!item) return { unknown: v.itemId } as const;
+    if (item.kind !== "other") return { gathered: item.kind } as const;
+    await tx.delete(dockingItems).where(and(eq(dockingItems.orgId, v.orgId), eq(dockingItems.id, item.id)));
+    await tx.update(dockings).set({ updatedAt: new Date() }).where(and(eq(dockings.orgId, v.orgId), eq(dockings.id, v.dockingId)));
+    await writeAudit(tx, {
+      orgId: v.orgId,
+      actorUserId: v.actorUserId,
+      action: "docking_item.remove",
+      entity: "docking_item",
+      entityId: item.id,
+      detail: {
+        dockingId: v.dockingId,
+        tankId: item.tankId,
+        description: item.description,
+        quantity: item.quantity,
+        unit: item.unit,
+        unitRate: item.unitRate,
+        reason: item.addedReason,
+        included: item.included,
+        adjustedQuantity: item.adjustedQuantity,
+        adjustmentReason: item.adjustmentReason,
+      },
+    });
+    return { removed: item.id } as const;
+  });
+}
+
+/**
+ * The company's most recent docking that was not cancelled (any vessel; latest
+ * planned date, then latest created): where a new docking's currency and rates
+ * start from. Null when the company has none.
+ */
+export async function getLatestDockingRates(scope: TOrgScope) {
+  const [row] = await db()
+    .select({
+      dockingId: dockings.id,
+      vesselName: vessels.name,
+      yard: dockings.yard,
+      plannedOn: dockings.plannedOn,
+      currency: dockings.currency,
+      steelRatePerKg: dockings.steelRatePerKg,
+      coatingRatePerM2: dockings.coatingRatePerM2,
+      anodeRatePerPiece: dockings.anodeRatePerPiece,
+      sedimentRatePerM3: dockings.sedimentRatePerM3,
+    })
+    .from(dockings)
+    .innerJoin(vessels, and(eq(vessels.orgId, dockings.orgId), eq(vessels.id, dockings.vesselId)))
+    .where(and(eq(dockings.orgId, scope.orgId), ne(dockings.status, "cancelled")))
+    .orderBy(desc(dockings.plannedOn), desc(dockings.createdAt))
+    .limit(1);
+  return row ?? null;
 }
 
 export type TItemDecision = { id: string; included: boolean; adjustedQuantity: number | null; adjustmentReason: string | null };
@@ -250,7 +373,7 @@ export async function decideItems(v: TDockingScope & { actorUserId: string; deci
   return db().transaction(async (tx) => {
     const docking = await lockDocking(tx, v);
     if (!docking) return null;
-    if (docking.status === "completed" || docking.status === "cancelled") return { locked: docking.status } as const;
+    if (isLocked(docking.status)) return { locked: docking.status } as const;
     const ids = v.decisions.map((d) => d.id);
     const rows = await tx.select().from(dockingItems).where(and(eq(dockingItems.orgId, v.orgId), eq(dockingItems.dockingId, v.dockingId), inArray(dockingItems.id, ids)));
     const byId = new Map(rows.map((r) => [r.id, r]));

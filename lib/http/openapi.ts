@@ -7,7 +7,7 @@ import { z } from "zod";
 import { ZApiTokenInput } from "@/lib/schemas/api-token";
 import { ZCommentInput } from "@/lib/schemas/comment";
 import { ZIntervalsInput } from "@/lib/schemas/intervals";
-import { ZDockingDecisions, ZDockingDoneInput, ZDockingInput, ZDockingStatusInput, ZWorkListQuery } from "@/lib/schemas/docking";
+import { ZDockingDecisions, ZDockingDoneInput, ZDockingInput, ZDockingOtherItemInput, ZDockingStatusInput, ZWorkListQuery } from "@/lib/schemas/docking";
 import { ZFleetQuery } from "@/lib/schemas/fleet";
 import { findingInputSchema, notInspectedInputSchema, sedimentInputSchema, ZAnodesInput, ZCoatingInput, ZEntryRecordInput, ZFindingsFlagInput, ZHeaderInput, ZInspectionStart, ZReadingInput, ZRemarksInput } from "@/lib/schemas/inspection";
 import { ZPasswordResetConfirm, ZPasswordResetRequest } from "@/lib/schemas/password-reset";
@@ -189,6 +189,8 @@ export const API_OPERATIONS: TApiOperation[] = [
   { method: "post", path: "/api/v1/vessels/{vesselId}/dockings", tag: "Dockings", summary: "Plan a docking with its unit rates; its work list is gathered", body: ZDockingInput, response: ok("The new docking.", 201) },
   { method: "get", path: "/api/v1/dockings/{dockingId}", tag: "Dockings", summary: "A docking with one page of its priced work list", query: ZWorkListQuery, response: ok("The docking, one page of items (optionally one tank's) with the cost of each, and the totals over every item.") },
   { method: "put", path: "/api/v1/dockings/{dockingId}/items", tag: "Dockings", summary: "Include, exclude or adjust work-list items, with a reason", query: ZWorkListQuery, body: ZDockingDecisions, response: ok("The docking as saved, with the page of items asked for.") },
+  { method: "post", path: "/api/v1/dockings/{dockingId}/items", tag: "Dockings", summary: "Add work no finding asks for (staging, gas-freeing, cleaning, attendance, a lump sum) at its own unit rate, with a reason", query: ZWorkListQuery, body: ZDockingOtherItemInput, response: ok("The new item's id and the docking, with the page of items asked for.", 201) },
+  { method: "delete", path: "/api/v1/dockings/{dockingId}/items/{itemId}", tag: "Dockings", summary: "Remove an item added by hand (a gathered item is excluded instead: 409)", query: ZWorkListQuery, response: ok("The docking, with the page of items asked for.") },
   { method: "post", path: "/api/v1/dockings/{dockingId}/rebuild", tag: "Dockings", summary: "Gather the work list again from the latest countersigned reports", query: ZWorkListQuery, response: ok("The docking; decisions stay with their items.") },
   { method: "get", path: "/api/v1/dockings/{dockingId}/work-list.csv", tag: "Dockings", summary: "The priced work list as CSV", response: ok("Header, one row per item, totals per kind and the grand total.", 200, "text/csv") },
   { method: "put", path: "/api/v1/dockings/{dockingId}/status", tag: "Dockings", summary: "Start, complete or cancel a docking; completed and cancelled are final", query: ZWorkListQuery, body: ZDockingStatusInput, response: ok("The docking with its new status.") },

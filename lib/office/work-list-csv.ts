@@ -2,6 +2,9 @@
 // they hold a comma, a quote or a line break, quotes doubled). A text cell that
 // a spreadsheet would run as a formula (=, +, -, @ first) gets a leading
 // apostrophe. Costs carry the currency's minor unit; quantities up to 3 decimals.
+// Work added by hand ("other") has its own unit rate on its row and its reason
+// for being added in the Reason column; its total row has no quantity or unit
+// (mixed units), only the counts and the cost.
 import { WORK_KIND_LABELS, WORK_KINDS, WORK_UNITS, type TPricedWorkList, type TWorkKind } from "./work-list";
 
 export const WORK_LIST_CSV_HEADER = ["Tank", "Kind", "Description", "Included", "Quantity gathered", "Adjusted quantity", "Quantity priced", "Unit", "Unit rate", "Currency", "Cost", "Reason"] as const;
@@ -12,7 +15,14 @@ export type TCsvItem = {
   description: string;
   unit: string;
   quantity: number;
+  /** Hand-added items: why the work was added. */
+  addedReason?: string | null;
 };
+
+/** The Reason cell: why a hand-added item was added, then the reason of an exclusion or adjustment. */
+function reasonText(i: TCsvItem & { adjustmentReason: string | null }): string {
+  return [i.addedReason ? `Added: ${i.addedReason}` : null, i.adjustmentReason].filter(Boolean).join("; ");
+}
 
 export function csvField(value: string): string {
   return /[",\r\n]/.test(value) ? `"${value.replaceAll('"', '""')}"` : value;
@@ -42,12 +52,13 @@ export function workListCsv<T extends TCsvItem>(list: TPricedWorkList<T>, head: 
       String(i.unitRate),
       list.currency,
       money(i.cost),
-      defuseFormula(i.adjustmentReason ?? ""),
+      defuseFormula(reasonText(i)),
     ]);
   }
   for (const k of WORK_KINDS) {
     const t = list.totals[k];
-    rows.push(["Total", WORK_KIND_LABELS[k], `${t.included} included, ${t.excluded} excluded`, "", "", "", csvQuantity(t.quantity), WORK_UNITS[k], "", list.currency, money(t.cost), ""]);
+    const [quantity, unit] = t.quantity === null || k === "other" ? ["", ""] : [csvQuantity(t.quantity), WORK_UNITS[k]];
+    rows.push(["Total", WORK_KIND_LABELS[k], `${t.included} included, ${t.excluded} excluded`, "", "", "", quantity, unit, "", list.currency, money(t.cost), ""]);
   }
   rows.push(["Grand total", "", defuseFormula(`${head.vesselName}, ${head.yard}, ${head.place}, planned ${head.plannedOn}`), "", "", "", "", "", "", list.currency, money(list.grandTotal), ""]);
   return rows.map((r) => r.map(csvField).join(",")).join("\r\n") + "\r\n";

@@ -1,6 +1,12 @@
 // The docking work list: what each tank's latest countersigned inspection asks
 // the yard to do (steel renewal, coating repair, anodes, sediment removal), and
-// what it costs at the docking's unit rates.
+// what it costs at the docking's unit rates; plus the work the superintendent
+// adds by hand ("other": staging, gas-freeing, cleaning, attendance, lump sums),
+// each item priced at its own unit rate.
+//
+// "Other" items come in mixed units (days, m², lump sum), so their quantities
+// are never summed: the kind's total carries its cost and item counts, and its
+// quantity is null (shown as a dash).
 //
 // Rounding: every quantity and cost is carried unrounded; each cost shown (per
 // item, per kind, grand total) is rounded on its own, once, at the end, to the
@@ -11,10 +17,22 @@ import { AppError } from "@/lib/errors";
 import { totalVolumeM3 } from "@/lib/calc/sediment";
 import { FINDING_TYPE_LABELS, MEMBER_KIND_LABELS, PLATING_REGION_LABELS, REPAIR_KIND_LABELS, type FINDING_STATUSES, type TFindingType, type TMemberKind, type TPlatingRegion, type TRepairKind } from "@/lib/vocabulary";
 
-export const WORK_KINDS = ["steel", "coating", "anodes", "sediment"] as const;
+/** The kinds gathered from countersigned reports and priced at the docking's rates. */
+export const GATHERED_KINDS = ["steel", "coating", "anodes", "sediment"] as const;
+export type TGatheredKind = (typeof GATHERED_KINDS)[number];
+/** Every kind of a work list, in its order: the gathered kinds, then the work added by hand. */
+export const WORK_KINDS = [...GATHERED_KINDS, "other"] as const;
 export type TWorkKind = (typeof WORK_KINDS)[number];
-export const WORK_UNITS: Record<TWorkKind, string> = { steel: "kg", coating: "m²", anodes: "pcs", sediment: "m³" };
-export const WORK_KIND_LABELS: Record<TWorkKind, string> = { steel: "Steel renewal", coating: "Coating repair", anodes: "Anode renewal", sediment: "Sediment removal" };
+export const WORK_UNITS: Record<TGatheredKind, string> = { steel: "kg", coating: "m²", anodes: "pcs", sediment: "m³" };
+export const WORK_KIND_LABELS: Record<TWorkKind, string> = {
+  steel: "Steel renewal",
+  coating: "Coating repair",
+  anodes: "Anode renewal",
+  sediment: "Sediment removal",
+  other: "Other work (added by hand)",
+};
+export const isGatheredKind = (kind: string): kind is TGatheredKind => (GATHERED_KINDS as readonly string[]).includes(kind);
+export const isWorkKind = (kind: string): kind is TWorkKind => (WORK_KINDS as readonly string[]).includes(kind);
 
 // ---------------------------------------------------------------- gathering
 
@@ -48,7 +66,7 @@ export type TWorkSource = {
 export type TWorkItem = {
   /** Stable across rebuilds of the list: finding id and kind, or tank id and kind. */
   key: string;
-  kind: TWorkKind;
+  kind: TGatheredKind;
   tankId: string;
   tankCode: string;
   inspectionId: string;
@@ -73,7 +91,8 @@ function describeFinding(f: TWorkSourceFinding): string {
  * countersigned inspection): per open finding a steel item (kg) and a coating
  * item (m²) where it has them, per tank an anode item (pieces to renew) and a
  * sediment item (m³, all zones). Findings under monitoring or closed are left
- * out; open findings without quantities come back as `unpriced`.
+ * out; open findings without quantities come back as `unpriced`. Never
+ * produces "other": that work is added by hand.
  */
 export function gatherWorkItems(sources: readonly TWorkSource[]): { items: TWorkItem[]; unpriced: TUnpricedFinding[] } {
   const items: TWorkItem[] = [];
@@ -120,23 +139,27 @@ export type TPricedWorkItem<T> = T & {
   adjustmentReason: string | null;
   /** The quantity priced: the adjusted one where there is one. */
   quantityPriced: number;
+  /** The docking's rate for the kind, or a hand-added item's own rate. */
   unitRate: number;
   /** quantityPriced × unitRate, rounded to the minor unit; shown for excluded items too, never added to the totals. */
   cost: number;
 };
 
 export type TKindTotal = { quantity: number; cost: number; included: number; excluded: number };
+/** Hand-added work: mixed units, so no total quantity (null), only the cost and the counts. */
+export type TOtherTotal = { quantity: null; cost: number; included: number; excluded: number };
+export type TKindTotals = Record<TGatheredKind, TKindTotal> & { other: TOtherTotal };
 export type TPricedWorkList<T> = {
   currency: string;
   minorUnits: number;
   items: TPricedWorkItem<T>[];
-  /** Per kind, over included items: quantity priced (unrounded), cost (rounded), item counts. */
-  totals: Record<TWorkKind, TKindTotal>;
+  /** Per kind, over included items: quantity priced (unrounded; null for "other"), cost (rounded), item counts. */
+  totals: TKindTotals;
   grandTotal: number;
   counts: { included: number; excluded: number; adjusted: number };
 };
 
-const RATE_OF: Record<TWorkKind, keyof Omit<TDockingRates, "currency">> = {
+const RATE_OF: Record<TGatheredKind, keyof Omit<TDockingRates, "currency">> = {
   steel: "steelRatePerKg",
   coating: "coatingRatePerM2",
   anodes: "anodeRatePerPiece",
@@ -161,41 +184,54 @@ export function roundMoney(amount: number, digits: number): number {
 
 /** Over the included items of one kind: the quantity priced, summed; and how many items are included and excluded. */
 export type TKindSum = { quantity: number; included: number; excluded: number };
+/** Over the included "other" items: the exact cost, Σ quantity priced × the item's own rate (unrounded); and the counts. */
+export type TOtherSum = { cost: number; included: number; excluded: number };
+export type TKindSums = Record<TGatheredKind, TKindSum> & { other: TOtherSum };
+
+/** Sums with nothing in them, to add to. */
+export function emptyKindSums(): TKindSums {
+  const gathered = Object.fromEntries(GATHERED_KINDS.map((k) => [k, { quantity: 0, included: 0, excluded: 0 }])) as Record<TGatheredKind, TKindSum>;
+  return { ...gathered, other: { cost: 0, included: 0, excluded: 0 } };
+}
 
 function checkRates(rates: TDockingRates): { path: string; message: string }[] {
-  return WORK_KINDS.flatMap((kind) => {
+  return GATHERED_KINDS.flatMap((kind) => {
     const rate = rates[RATE_OF[kind]];
     return !Number.isFinite(rate) || rate < 0 ? [{ path: RATE_OF[kind], message: "must be a number, 0 or more" }] : [];
   });
 }
 
 /**
- * The totals of a work list from each kind's summed quantity: cost per kind
- * and grand total, each rounded once from the exact amount (quantity × rate).
- * priceWorkList uses it over its items; a server reading a long list sums the
- * quantities in the database and prices only the page it shows.
+ * The totals of a work list from each kind's sum: cost per kind and grand
+ * total, each rounded once from the exact amount (a gathered kind's summed
+ * quantity × the docking's rate; for "other", the summed exact cost of its
+ * items, each at its own rate). priceWorkList uses it over its items; a server
+ * reading a long list sums in the database and prices only the page it shows.
  */
-export function priceKindSums(sums: Record<TWorkKind, TKindSum>, rates: TDockingRates, adjusted: number): Omit<TPricedWorkList<never>, "items"> {
+export function priceKindSums(sums: TKindSums, rates: TDockingRates, adjusted: number): Omit<TPricedWorkList<never>, "items"> {
   const issues = checkRates(rates);
+  if (!Number.isFinite(sums.other.cost) || sums.other.cost < 0) issues.push({ path: "other.cost", message: "must be a number, 0 or more" });
   if (issues.length) throw new AppError("unprocessable", "The work list cannot be priced as it is.", issues);
   const minorUnits = currencyMinorUnits(rates.currency);
-  const exact = Object.fromEntries(WORK_KINDS.map((k) => [k, sums[k].quantity * rates[RATE_OF[k]]])) as Record<TWorkKind, number>;
-  const totals = Object.fromEntries(WORK_KINDS.map((k) => [k, { ...sums[k], cost: roundMoney(exact[k], minorUnits) }])) as Record<TWorkKind, TKindTotal>;
+  const exact = { ...(Object.fromEntries(GATHERED_KINDS.map((k) => [k, sums[k].quantity * rates[RATE_OF[k]]])) as Record<TGatheredKind, number>), other: sums.other.cost };
+  const gathered = Object.fromEntries(GATHERED_KINDS.map((k) => [k, { ...sums[k], cost: roundMoney(exact[k], minorUnits) }])) as Record<TGatheredKind, TKindTotal>;
+  const totals: TKindTotals = { ...gathered, other: { quantity: null, cost: roundMoney(exact.other, minorUnits), included: sums.other.included, excluded: sums.other.excluded } };
   const grandTotal = roundMoney(WORK_KINDS.reduce((sum, k) => sum + exact[k], 0), minorUnits);
   const counts = { included: WORK_KINDS.reduce((n, k) => n + sums[k].included, 0), excluded: WORK_KINDS.reduce((n, k) => n + sums[k].excluded, 0), adjusted };
   return { currency: rates.currency, minorUnits, totals, grandTotal, counts };
 }
 
 /**
- * Prices work items at the docking's rates. Each item may carry the
- * superintendent's decision; an adjusted quantity replaces the gathered one and
- * needs a reason. Refuses (422) a negative or non-numeric rate or quantity, or
- * an adjustment without a reason; the docking schema refuses them first.
+ * Prices work items: gathered kinds at the docking's rates, "other" items at
+ * their own `unitRate`. Each item may carry the superintendent's decision; an
+ * adjusted quantity replaces the gathered one and needs a reason. Refuses (422)
+ * a negative or non-numeric rate or quantity, an "other" item without its own
+ * rate, or an adjustment without a reason; the docking schemas refuse them first.
  */
-export function priceWorkList<T extends { key: string; kind: TWorkKind; quantity: number } & TWorkItemDecision>(items: readonly T[], rates: TDockingRates): TPricedWorkList<T> {
+export function priceWorkList<T extends { key: string; kind: TWorkKind; quantity: number; unitRate?: number | null } & TWorkItemDecision>(items: readonly T[], rates: TDockingRates): TPricedWorkList<T> {
   const issues = checkRates(rates);
   const minorUnits = currencyMinorUnits(rates.currency);
-  const sums = Object.fromEntries(WORK_KINDS.map((k) => [k, { quantity: 0, included: 0, excluded: 0 }])) as Record<TWorkKind, TKindSum>;
+  const sums = emptyKindSums();
   let adjustedCount = 0;
   const priced = items.map((item) => {
     const included = item.included ?? true;
@@ -208,13 +244,25 @@ export function priceWorkList<T extends { key: string; kind: TWorkKind; quantity
       adjustedCount += 1;
     }
     const quantityPriced = adjustedQuantity ?? item.quantity;
-    const unitRate = rates[RATE_OF[item.kind]];
-    const sum = sums[item.kind];
-    if (included) {
-      sum.quantity += quantityPriced;
-      sum.included += 1;
+    const own = item.unitRate ?? null;
+    if (item.kind === "other" && (own === null || !Number.isFinite(own) || own < 0)) issues.push({ path: `${item.key}.unitRate`, message: "must be a number, 0 or more: work added by hand carries its own rate" });
+    const unitRate = item.kind === "other" ? (own ?? 0) : rates[RATE_OF[item.kind]];
+    if (item.kind === "other") {
+      const sum = sums.other;
+      if (included) {
+        sum.cost += quantityPriced * unitRate;
+        sum.included += 1;
+      } else {
+        sum.excluded += 1;
+      }
     } else {
-      sum.excluded += 1;
+      const sum = sums[item.kind];
+      if (included) {
+        sum.quantity += quantityPriced;
+        sum.included += 1;
+      } else {
+        sum.excluded += 1;
+      }
     }
     return { ...item, included, adjusted: adjustedQuantity !== null, adjustedQuantity, adjustmentReason, quantityPriced, unitRate, cost: roundMoney(quantityPriced * unitRate, minorUnits) };
   });

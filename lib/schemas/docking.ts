@@ -71,6 +71,55 @@ export const ZDockingDecisions = z.object({
     .max(1000, "at most 1000 items at once"),
 });
 
+/**
+ * Words that only say "something else" and give a yard nothing to price:
+ * a hand-added item must say what the yard is to do.
+ */
+const CATCH_ALL = /^(misc(ellaneous)?\.?|sundr(y|ies)|various|extras?|other( works?)?|etc\.?|as (required|needed|per (yard|quote|quotation))|see (quote|quotation|attached)|tbd|tba|n\/?a)( (works?|items?|jobs?|services?))?$/i;
+
+/** What the yard is to do, in a few words: "Staging in 3P for bracket renewal", "Gas-freeing and ventilation, 4 tanks". */
+const workDescription = z
+  .string({ error: "is required: say what the yard is to do" })
+  .trim()
+  .max(300, "must be at most 300 characters")
+  .refine((d) => d.length > 0, { error: "is required: say what the yard is to do", abort: true })
+  .refine((d) => !CATCH_ALL.test(d.replace(/\s+/g, " ")), { error: "only says \"other work\": say what the yard is to do, e.g. \"Staging in 3P for bracket renewal\"", abort: true })
+  .refine((d) => d.split(/\s+/).filter((w) => /[\p{L}\d]/u.test(w)).length >= 3 && d.length >= 10, "is too short for a yard to price: say what is to be done, and where, in at least three words");
+
+const measureOf = (what: string) =>
+  z.preprocess(
+    numberFromForm,
+    z
+      .number({ error: (i) => (i.input === undefined ? `is required: ${what}` : `must be a number: ${what}`) })
+      .min(0, "cannot be negative")
+      .max(MAX_RATE, `must be at most ${MAX_RATE.toLocaleString("en")}`),
+  );
+
+/**
+ * Work the superintendent adds by hand ("other"): not asked for by any
+ * finding, priced at its own rate in the docking's currency. The tank is
+ * optional (a surveyor's attendance belongs to no tank); the server checks
+ * that a given tank is one of the docking's vessel.
+ */
+export const ZDockingOtherItemInput = z.object({
+  description: workDescription,
+  tankId: z.preprocess(blankParam, z.uuid({ error: "must be a tank of the vessel" }).optional()),
+  quantity: measureOf("how many units"),
+  unit: z
+    .string({ error: "is required: lump sum, days, m², pcs …" })
+    .trim()
+    .min(1, "is required: lump sum, days, m², pcs …")
+    .max(20, "must be at most 20 characters"),
+  unitRate: rate("per unit, in the docking's currency"),
+  reason: z
+    .string({ error: "is required: say why the item is added" })
+    .trim()
+    .min(1, "is required: say why the item is added")
+    .max(500, "must be at most 500 characters")
+    .refine((r) => r.length >= 5, "say why the item is added, in a few words"),
+});
+export type TDockingOtherItemInput = z.infer<typeof ZDockingOtherItemInput>;
+
 /** Start, complete or cancel a docking. */
 export const ZDockingStatusInput = z.object({ status: z.enum(DOCKING_STATUSES, { error: `must be one of ${DOCKING_STATUSES.join(", ")}` }) });
 

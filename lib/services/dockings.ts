@@ -10,8 +10,8 @@ import { authorizeVessel } from "@/lib/auth/authorize";
 import { AppError, issuesFromZod } from "@/lib/errors";
 import { validateInput } from "@/lib/http/route";
 import { workListCsv } from "@/lib/office/work-list-csv";
-import { gatherWorkItems, priceKindSums, priceWorkList, WORK_KINDS, type TKindSum, type TWorkKind, type TWorkSource } from "@/lib/office/work-list";
-import { workListQueryFromParams, ZDockingDecisions, ZDockingDoneInput, ZDockingInput, ZDockingStatusInput, type TWorkListQuery } from "@/lib/schemas/docking";
+import { emptyKindSums, gatherWorkItems, isGatheredKind, isWorkKind, priceKindSums, priceWorkList, WORK_KIND_LABELS, type TWorkSource } from "@/lib/office/work-list";
+import { workListQueryFromParams, ZDockingDecisions, ZDockingDoneInput, ZDockingInput, ZDockingOtherItemInput, ZDockingStatusInput, type TWorkListQuery } from "@/lib/schemas/docking";
 import { DOCKING_STATUS_LABELS, type TRole } from "@/lib/vocabulary";
 
 /** Who plans dockings and reads their work lists: the office. */
@@ -34,7 +34,6 @@ async function authorizeDocking(actor: TActor, dockingId: string) {
   }
 }
 
-const isWorkKind = (k: string): k is TWorkKind => (WORK_KINDS as readonly string[]).includes(k);
 const gather = (sources: TWorkSource[]) => gatherWorkItems(sources).items;
 
 const lockedError = (status: string) =>
@@ -56,7 +55,6 @@ export async function readWorkListAs(actor: TActor, dockingId: string) {
   const { orgId, vessel } = await authorizeDocking(actor, dockingId);
   const [docking, rows] = await Promise.all([q.getDocking({ orgId, dockingId }), q.listDockingItems({ orgId, dockingId })]);
   if (!docking) throw new AppError("not_found", "No such docking.");
-  // Items are gathered with the four work kinds only; "other" is kept in the enum for hand-added work.
   const items = rows.flatMap((r) => (isWorkKind(r.kind) ? [{ ...r, key: r.id, kind: r.kind }] : []));
   return { orgId, vessel: { id: vessel.id, name: vessel.name, imoNumber: vessel.imoNumber }, docking, workList: priceWorkList(items, docking) };
 }
@@ -88,11 +86,13 @@ export async function getDockingAs(actor: TActor, dockingId: string, params: TWo
   ]);
   if (!docking) throw new AppError("not_found", "No such docking.");
   // The totals from the database's sums; only the page's items are priced one by one.
-  const byKind = Object.fromEntries(WORK_KINDS.map((k) => [k, { quantity: 0, included: 0, excluded: 0 }])) as Record<TWorkKind, TKindSum>;
+  // Gathered kinds are priced from their summed quantity; hand-added work from its summed cost (mixed units).
+  const byKind = emptyKindSums();
   let adjusted = 0;
   for (const s of sums) {
-    if (!isWorkKind(s.kind)) continue;
-    byKind[s.kind] = { quantity: s.quantity, included: s.included, excluded: s.excluded };
+    if (isGatheredKind(s.kind)) byKind[s.kind] = { quantity: s.quantity, included: s.included, excluded: s.excluded };
+    else if (s.kind === "other") byKind.other = { cost: s.cost, included: s.included, excluded: s.excluded };
+    else continue;
     adjusted += s.adjusted;
   }
   const pageItems = page.rows.flatMap((r) => (isWorkKind(r.kind) ? [{ ...r, key: r.id, kind: r.kind }] : []));
@@ -126,7 +126,45 @@ export async function decideDockingItemsAs(actor: TActor, dockingId: string, bod
   return { changed: result.changed ?? 0, ...(await getDockingAs(actor, dockingId, view)) };
 }
 
-/** Gathers the work again from the latest countersigned reports, keeping each item's decision. */
+/**
+ * Adds work that no finding asks for (staging, gas-freeing, cleaning, a
+ * surveyor's attendance, a lump sum), priced at its own rate; audit-logged.
+ * The tank, when given, must be one of the docking's vessel (400 otherwise).
+ */
+export async function addDockingItemAs(actor: TActor, dockingId: string, body: unknown, view?: TWorkListQuery) {
+  const { orgId } = await authorizeDocking(actor, dockingId);
+  const input = validateInput(ZDockingOtherItemInput, body);
+  const result = await q.addOtherItem({ orgId, dockingId, actorUserId: actor.userId, input });
+  if (!result) throw new AppError("not_found", "No such docking.");
+  if (result.locked) throw lockedError(result.locked);
+  if (result.foreignTank) {
+    throw new AppError("bad_request", "That tank is not a tank of this docking's vessel; nothing was added. Choose one of the vessel's tanks, or none.", [{ path: "tankId", message: "must be a tank of the docking's vessel" }]);
+  }
+  return { itemId: result.itemId!, ...(await getDockingAs(actor, dockingId, view)) };
+}
+
+/** Removes an item added by hand; a gathered item cannot be removed (409: exclude it, with a reason). */
+export async function removeDockingItemAs(actor: TActor, dockingId: string, itemId: string, view?: TWorkListQuery) {
+  const { orgId } = await authorizeDocking(actor, dockingId);
+  if (!ZId.safeParse(itemId).success) throw new AppError("not_found", "No such item in this docking.");
+  const result = await q.removeOtherItem({ orgId, dockingId, actorUserId: actor.userId, itemId });
+  if (!result) throw new AppError("not_found", "No such docking.");
+  if (result.locked) throw lockedError(result.locked);
+  if (result.unknown) throw new AppError("not_found", "No such item in this docking.");
+  if (result.gathered) {
+    const kind = isWorkKind(result.gathered) ? WORK_KIND_LABELS[result.gathered].toLowerCase() : result.gathered;
+    throw new AppError("conflict", `This ${kind} item was gathered from a countersigned report and cannot be removed; exclude it instead, with a reason.`, [{ path: "itemId", message: "is a gathered item: exclude it instead" }]);
+  }
+  return getDockingAs(actor, dockingId, view);
+}
+
+/** Where a new docking's currency and rates start from: the company's most recent docking (any vessel), or null. */
+export async function latestDockingRatesAs(actor: TActor, vesselId: string) {
+  const { orgId } = await authorizeVessel({ actor, vesselId, allow: DOCKING_PLANNERS });
+  return q.getLatestDockingRates({ orgId });
+}
+
+/** Gathers the work again from the latest countersigned reports, keeping each item's decision and the work added by hand. */
 export async function rebuildDockingAs(actor: TActor, dockingId: string, view?: TWorkListQuery) {
   const { orgId } = await authorizeDocking(actor, dockingId);
   const result = await q.rebuildDocking({ orgId, dockingId, actorUserId: actor.userId, gather });

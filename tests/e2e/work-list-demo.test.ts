@@ -90,6 +90,8 @@ describe("the docking work list from the demo data in Chromium", () => {
       expect(await workList.totalCells("anodes")).toEqual(["Anode renewal", "1 pcs", "1 included", "$145.00"]);
       // demo seed: 0.050 m × 20 m² = 1.0 m³ × 60.00 = 60.00
       expect(await workList.totalCells("sediment")).toEqual(["Sediment removal", "1 m³", "1 included", "$60.00"]);
+      // nothing added by hand: its quantity is never summed (mixed units), shown as a dash
+      expect(await workList.totalCells("other")).toEqual(["Other work (added by hand)", "—", "0 included", "$0.00"]);
       // 0.00 + 140.60 + 145.00 + 60.00 = 345.60
       expect(await workList.grandTotalCells()).toEqual(["Grand total", "", "", "$345.60"]);
       expect(await page.getByText("Open findings the yard cannot price").count()).toBe(0);
@@ -115,6 +117,8 @@ describe("the docking work list from the demo data in Chromium", () => {
         'Total,Coating repair,"2 included, 0 excluded",,,,3.7,m²,,USD,140.60,',
         'Total,Anode renewal,"1 included, 0 excluded",,,,1,pcs,,USD,145.00,',
         'Total,Sediment removal,"1 included, 0 excluded",,,,1,m³,,USD,60.00,',
+        // nothing added by hand: no quantity (mixed units), 0.00
+        'Total,Other work (added by hand),"0 included, 0 excluded",,,,,,,USD,0.00,',
         // 0.00 + 140.60 + 145.00 + 60.00 = 345.60
         'Grand total,,"Skerry Lantern, Demo repair yard, Port Averly, dry dock 2, planned 2027-03-08",,,,,,,USD,345.60,',
       ]);

@@ -1,6 +1,6 @@
 // The superintendent plans a docking in Chromium, sees the work list gathered
 // from a countersigned report with its totals, adjusts an item with a reason,
-// and downloads the CSV.
+// adds work by hand (staging) at its own rate, and downloads the CSV.
 import path from "node:path";
 import { and, eq } from "drizzle-orm";
 import type { Browser } from "playwright-core";
@@ -52,6 +52,20 @@ describe("the docking work list in Chromium", () => {
     // sediment 3 m³ × 95.00 = 285.00; grand total 131.35 + 180.00 + 285.00 = 596.35
     expect(await workList.total("sediment").textContent()).toContain("$285.00");
     expect(await workList.grandTotal().textContent()).toContain("$596.35");
+
+    // Work no finding asks for: a refused box keeps what was typed, then the item is added at its own rate.
+    const staging = { Description: "Staging in No. 1 WBT P for the coating repair", Tank: "No. 1 WBT P", Quantity: "2", Unit: "days", "Unit rate (USD per unit)": "-1250.50", Reason: "Coating repair at Fr. 82–89 is out of reach" };
+    await workList.fillItem(staging);
+    await workList.addItemForm().getByRole("button", { name: "Add the item" }).click();
+    await page.getByText("Unit rate (USD per unit) cannot be negative").waitFor();
+    expect(await workList.addItemForm().getByLabel("Description", { exact: true }).inputValue()).toBe(staging.Description);
+    expect(await workList.grandTotal().textContent()).toContain("$596.35");
+    await workList.addItem({ "Unit rate (USD per unit)": "1250.50" });
+    // 2 days × 1 250.50 = 2 501.00; grand total 596.35 + 2 501.00 = 3 097.35
+    expect(await workList.totalCells("other")).toEqual(["Other work (added by hand)", "—", "1 included", "$2,501.00"]);
+    expect(await workList.grandTotal().textContent()).toContain("$3,097.35");
+    expect((await workList.itemRows()).find((cells) => cells[1]!.startsWith("Staging"))?.slice(2, 5)).toEqual(["2 days", "$1,250.50", "$2,501.00"]);
+    expect(await workList.addItemForm().getByLabel("Description", { exact: true }).inputValue()).toBe("");
     await page.screenshot({ path: path.join(ARTIFACTS, "work-list.png"), fullPage: true });
 
     const { fileName, text } = await workList.exportCsv();
@@ -60,7 +74,13 @@ describe("the docking work list in Chromium", () => {
     expect(lines[0]).toBe("Tank,Kind,Description,Included,Quantity gathered,Adjusted quantity,Quantity priced,Unit,Unit rate,Currency,Cost,Reason");
     expect(lines).toContain("No. 1 WBT P,Sediment removal,\"Sediment removal, 1 zone\",yes,1,3,3,m³,95,USD,285.00,Yard survey found more mud");
     expect(lines).toContain("Total,Coating repair,\"2 included, 0 excluded\",,,,3.7,m²,,USD,131.35,");
-    expect(lines.at(-2)).toMatch(/^Grand total,,".*",,,,,,,USD,596\.35,$/);
+    expect(lines).toContain("No. 1 WBT P,Other work (added by hand),Staging in No. 1 WBT P for the coating repair,yes,2,,2,days,1250.5,USD,2501.00,Added: Coating repair at Fr. 82–89 is out of reach");
+    expect(lines).toContain('Total,Other work (added by hand),"1 included, 0 excluded",,,,,,,USD,2501.00,');
+    expect(lines.at(-2)).toMatch(/^Grand total,,".*",,,,,,,USD,3097\.35,$/);
+
+    // Removed again: back to the gathered total, 596.35 as worked above.
+    await workList.removeItem(/Staging in No\. 1 WBT P/);
+    expect(await workList.grandTotal().textContent()).toContain("$596.35");
 
     // After the docking: the yard's work is ticked off item by item; finding 1 closes with its only item.
     await workList.startDocking();

@@ -302,6 +302,14 @@ const CASES: TCase[] = [
     name: "PUT /api/v1/dockings/:id/items (unknown item)", method: "PUT", path: (s, sc) => `${dockingPath(s, sc)}/items`,
     body: () => ({ items: [{ id: crypto.randomUUID(), included: true }] }), scopes: ["own", "sibling", "other"], expect: dockingPlanner(404),
   },
+  {
+    name: "POST /api/v1/dockings/:id/items", method: "POST", path: (s, sc) => `${dockingPath(s, sc)}/items`,
+    body: () => ({ description: "Staging in the matrix tank for access", quantity: 1, unit: "lump sum", unitRate: 1, reason: "Matrix check" }), scopes: ["own", "sibling", "other"], expect: dockingPlanner(201),
+  },
+  {
+    name: "DELETE /api/v1/dockings/:id/items/:itemId (unknown item)", method: "DELETE", path: (s, sc) => `${dockingPath(s, sc)}/items/${crypto.randomUUID()}`,
+    scopes: ["own", "sibling", "other"], expect: dockingPlanner(404),
+  },
   { name: "POST /api/v1/dockings/:id/rebuild", method: "POST", path: (s, sc) => `${dockingPath(s, sc)}/rebuild`, scopes: ["own", "sibling", "other"], expect: dockingPlanner(200) },
   { name: "GET /api/v1/dockings/:id/work-list.csv", path: (s, sc) => `${dockingPath(s, sc)}/work-list.csv`, scopes: ["own", "sibling", "other"], expect: dockingPlanner(200) },
   { name: "PUT /api/v1/dockings/:id/status (unknown status)", method: "PUT", path: (s, sc) => `${dockingPath(s, sc)}/status`, body: () => ({ status: "finished" }), scopes: ["own", "sibling", "other"], expect: dockingPlanner(400) },

@@ -219,6 +219,7 @@ describe("deciding on items", () => {
       `Total,Coating repair,"2 included, 1 excluded",,,,4,m²,,USD,142.00,`,
       `Total,Anode renewal,"1 included, 0 excluded",,,,1,pcs,,USD,180.00,`,
       `Total,Sediment removal,"1 included, 0 excluded",,,,3,m³,,USD,285.00,`,
+      `Total,Other work (added by hand),"0 included, 0 excluded",,,,,,,USD,0.00,`,
       `Grand total,,"${s.ownVessel.name}, Test Yard Shipbuilding, Test Harbour, Berth 3, planned 2027-04-12",,,,,,,USD,1101.55,`,
     ]);
   });

@@ -43,8 +43,29 @@ describe("workListCsv", () => {
       'Total,Coating repair,"1 included, 0 excluded",,,,2,m²,,JPY,8001,',
       'Total,Anode renewal,"0 included, 1 excluded",,,,0,pcs,,JPY,0,',
       'Total,Sediment removal,"0 included, 0 excluded",,,,0,m³,,JPY,0,',
+      'Total,Other work (added by hand),"0 included, 0 excluded",,,,,,,JPY,0,',
       'Grand total,,"Test Vessel, Yard, Port, planned 2027-01-01",,,,,,,JPY,8001,',
       "",
     ]);
+  });
+
+  it("writes work added by hand at its own rate with why it was added; its total has no quantity or unit (mixed units)", () => {
+    const list = priceWorkList(
+      [
+        { key: "a", kind: "sediment" as const, quantity: 1.5, tankCode: "1P", description: "Sediment removal, 1 zone", unit: "m³" },
+        { key: "o1", kind: "other" as const, quantity: 2, unitRate: 850.5, tankCode: "1P", description: "Staging in 1P, Fr. 60–64", unit: "days", addedReason: "Class wants the brackets gauged" },
+        { key: "o2", kind: "other" as const, quantity: 1, unitRate: 1200, tankCode: null, description: "Surveyor's attendance, one visit", unit: "lump sum", addedReason: "Intermediate survey", adjustedQuantity: 0.5, adjustmentReason: "Shared with the hull survey" },
+      ],
+      { currency: "EUR", steelRatePerKg: 3, coatingRatePerM2: 40, anodeRatePerPiece: 150, sedimentRatePerM3: 70 },
+    );
+    const lines = workListCsv(list, { vesselName: "Test Vessel", yard: "Yard", place: "Port", plannedOn: "2027-01-01" }).split("\r\n");
+    expect(lines.slice(1, 4)).toEqual([
+      "1P,Sediment removal,\"Sediment removal, 1 zone\",yes,1.5,,1.5,m³,70,EUR,105.00,", // 1.5 m³ × 70 = 105.00
+      "1P,Other work (added by hand),\"Staging in 1P, Fr. 60–64\",yes,2,,2,days,850.5,EUR,1701.00,Added: Class wants the brackets gauged", // 2 days × 850.50 = 1 701.00
+      ",Other work (added by hand),\"Surveyor's attendance, one visit\",yes,1,0.5,0.5,lump sum,1200,EUR,600.00,Added: Intermediate survey; Shared with the hull survey", // 0.5 × 1 200 = 600.00
+    ]);
+    // other: 1 701.00 + 600.00 = 2 301.00; grand total 105.00 + 2 301.00 = 2 406.00
+    expect(lines).toContain('Total,Other work (added by hand),"2 included, 0 excluded",,,,,,,EUR,2301.00,');
+    expect(lines.at(-2)).toBe('Grand total,,"Test Vessel, Yard, Port, planned 2027-01-01",,,,,,,EUR,2406.00,');
   });
 });

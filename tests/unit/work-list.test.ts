@@ -5,7 +5,7 @@ import { describe, expect, it } from "vitest";
 import { AppError } from "@/lib/errors";
 import { repairQuantities } from "@/lib/inspection/quantities";
 import { currencyMinorUnits, gatherWorkItems, priceKindSums, priceWorkList, roundMoney, type TWorkSource, type TWorkSourceFinding } from "@/lib/office/work-list";
-import { ZDockingInput, ZDockingItemDecisionInput } from "@/lib/schemas/docking";
+import { ZDockingInput, ZDockingItemDecisionInput, ZDockingOtherItemInput } from "@/lib/schemas/docking";
 
 const insert = repairQuantities({ kind: "insert_plate", lengthMm: 2500, widthMm: 1800, thicknessMm: 14, pieces: 1 });
 const profile = repairQuantities({ kind: "profile_renewal", lengthMm: 2400, kgPerM: 18.5, pieces: 1 });
@@ -50,6 +50,11 @@ const tankB: TWorkSource = {
   sedimentZones: [],
 };
 const usd = { currency: "USD", steelRatePerKg: 4.5, coatingRatePerM2: 85, anodeRatePerPiece: 120, sedimentRatePerM3: 60 };
+/** Work added by hand, each at its own rate (this test's own, not market prices). */
+const OTHER = [
+  { key: "o-staging", kind: "other" as const, quantity: 3, unitRate: 1250 }, // staging in 1P: 3 days × 1 250.00 USD/day
+  { key: "o-surveyor", kind: "other" as const, quantity: 2.5, unitRate: 65.45 }, // surveyor's attendance: 2.5 h × 65.45 USD/h
+];
 
 describe("gathering the work items", () => {
   const { items, unpriced } = gatherWorkItems([tankA, tankB]);
@@ -86,6 +91,10 @@ describe("gathering the work items", () => {
     expect(items[0]).toMatchObject({ tankCode: "1P", inspectionId: "insp-a" });
   });
 
+  it("never gathers work of the kind added by hand", () => {
+    expect(new Set(items.map((i) => i.kind))).toEqual(new Set(["steel", "coating", "anodes", "sediment"]));
+  });
+
   it("refuses two inspections of the same tank", () => {
     expect(() => gatherWorkItems([tankA, tankA])).toThrow(/1P is given twice/);
   });
@@ -116,19 +125,57 @@ describe("pricing (rates of this test: steel 4.50 USD/kg, coating 85 USD/m², an
   });
 
   it("totals from per-kind sums (as the database sums a long list) equal the totals of the items", () => {
-    // The same list as above, summed by kind: steel 494.55 + 44.4 = 538.95 kg, coating 4.5 + 12.4 = 16.9 m², 6 anodes, 46 m³.
+    // The same list as above plus the two items added by hand (OTHER), summed by kind: steel 494.55 + 44.4 = 538.95 kg,
+    // coating 4.5 + 12.4 = 16.9 m², 6 anodes, 46 m³; other by cost (mixed units): 3 days × 1 250.00 + 2.5 h × 65.45
+    // = 3 750.00 + 163.625 = 3 913.625.
     const sums = {
       steel: { quantity: 538.95, included: 2, excluded: 0 },
       coating: { quantity: 16.9, included: 2, excluded: 0 },
       anodes: { quantity: 6, included: 1, excluded: 0 },
       sediment: { quantity: 46, included: 1, excluded: 0 },
+      other: { cost: 3913.625, included: 2, excluded: 0 },
     };
     const fromSums = priceKindSums(sums, usd, 0);
     expect(fromSums.totals.steel.cost).toBe(2425.28); // 538.95 × 4.50 = 2 425.275 → 2 425.28
-    expect(fromSums.grandTotal).toBe(7341.78); // 2 425.275 + 1 436.50 + 720 + 2 760 = 7 341.775 → 7 341.78
-    const { items: _items, ...fromItems } = priceWorkList(items, usd);
-    expect(fromSums).toEqual({ ...fromItems, totals: Object.fromEntries(Object.entries(fromItems.totals).map(([k, t]) => [k, { ...t, quantity: sums[k as keyof typeof sums].quantity }])) });
+    expect(fromSums.totals.other).toEqual({ quantity: null, cost: 3913.63, included: 2, excluded: 0 }); // 3 913.625 → 3 913.63
+    // 2 425.275 + 1 436.50 + 720 + 2 760 + 3 913.625 = 11 255.40 (the rounded kind totals would add up to 11 255.41)
+    expect(fromSums.grandTotal).toBe(11255.4);
+    const { items: _items, ...fromItems } = priceWorkList([...items, ...OTHER], usd);
+    const quantityOf = (k: string) => (k === "other" ? null : sums[k as Exclude<keyof typeof sums, "other">].quantity);
+    expect(fromSums).toEqual({ ...fromItems, totals: Object.fromEntries(Object.entries(fromItems.totals).map(([k, t]) => [k, { ...t, quantity: quantityOf(k) }])) });
     expect(() => priceKindSums(sums, { ...usd, coatingRatePerM2: -5 }, 0)).toThrow(AppError);
+    expect(() => priceKindSums({ ...sums, other: { ...sums.other, cost: Number.NaN } }, usd, 0)).toThrow(AppError);
+  });
+
+  it("work added by hand is priced at its own rate; its total counts items and cost, never a quantity (mixed units)", () => {
+    const list = priceWorkList([...items, ...OTHER], usd);
+    const [staging, surveyor] = list.items.slice(-2);
+    expect(staging).toMatchObject({ unitRate: 1250, cost: 3750 }); // 3 days × 1 250.00 = 3 750.00
+    expect(surveyor).toMatchObject({ unitRate: 65.45, cost: 163.63 }); // 2.5 h × 65.45 = 163.625 → 163.63
+    expect(list.totals.other).toEqual({ quantity: null, cost: 3913.63, included: 2, excluded: 0 }); // 3 750 + 163.625 = 3 913.625 → 3 913.63
+    expect(list.totals.steel.cost).toBe(2425.28); // the gathered kinds are untouched by the items' own rates
+    expect(list.grandTotal).toBe(11255.4); // 7 341.775 + 3 913.625 = 11 255.40
+    expect(list.counts).toEqual({ included: 8, excluded: 0, adjusted: 0 });
+  });
+
+  it("an item added by hand may be adjusted or excluded like any other", () => {
+    const decided = OTHER.map((o) =>
+      o.key === "o-staging" ? { ...o, adjustedQuantity: 4, adjustmentReason: "Yard needs a fourth day for the brackets" } : { ...o, included: false, adjustmentReason: "Class attends free of charge" },
+    );
+    const list = priceWorkList(decided, usd);
+    expect(list.items[0]).toMatchObject({ quantity: 3, quantityPriced: 4, cost: 5000 }); // 4 days × 1 250.00 = 5 000.00
+    expect(list.items[1]).toMatchObject({ included: false, cost: 163.63 });
+    expect(list.totals.other).toEqual({ quantity: null, cost: 5000, included: 1, excluded: 1 });
+    expect(list.grandTotal).toBe(5000);
+    expect(list.counts).toEqual({ included: 1, excluded: 1, adjusted: 1 });
+  });
+
+  it("refuses an item added by hand without its own rate, or with a negative one (422)", () => {
+    const noRate = { key: "o-x", kind: "other" as const, quantity: 1, unitRate: null };
+    expect(() => priceWorkList([noRate], usd)).toThrow(AppError);
+    expect(() => priceWorkList([{ ...noRate, unitRate: -1 }], usd)).toThrow(AppError);
+    expect(() => priceWorkList([{ ...noRate, unitRate: Number.NaN }], usd)).toThrow(AppError);
+    expect(priceWorkList([{ ...noRate, unitRate: 0 }], usd).grandTotal).toBe(0);
   });
 
   it("an excluded item keeps its cost on its line but leaves the totals; an adjusted quantity replaces the gathered one", () => {
@@ -220,6 +267,27 @@ describe("docking input", () => {
     expect(issues(ZDockingInput.safeParse({ ...form, plannedOn: "2026-02-30" }))).toEqual(["plannedOn: is not a calendar date"]);
     expect(issues(ZDockingInput.safeParse({ ...form, plannedOn: "15/09/2026" }))).toEqual(["plannedOn: must be a date like 2026-03-14"]);
     expect(issues(ZDockingInput.safeParse({ ...form, yard: " " }))).toEqual(["yard: name the yard"]);
+  });
+
+  it("work added by hand: accepts form strings, an optional tank and a rate of 0", () => {
+    const add = { description: "Staging in 3P for bracket renewal", tankId: "", quantity: "4", unit: "days", unitRate: "0", reason: "Class asked for access to the brackets" };
+    expect(ZDockingOtherItemInput.safeParse(add).data).toEqual({ ...add, tankId: undefined, quantity: 4, unitRate: 0 });
+    expect(ZDockingOtherItemInput.safeParse({ ...add, tankId: "8a7f2c1e-3d4b-4f6a-9b8c-1d2e3f4a5b6c" }).success).toBe(true);
+  });
+
+  it("work added by hand: refuses a catch-all or too short description, a bad number, a missing unit or reason, saying which", () => {
+    const add = { description: "Gas-freeing and ventilation of 1P and 1S", quantity: 1, unit: "lump sum", unitRate: 2400, reason: "Hot work in both tanks" };
+    expect(issues(ZDockingOtherItemInput.safeParse({ ...add, description: "Misc works" }))).toEqual([expect.stringMatching(/^description: only says "other work"/)]);
+    expect(issues(ZDockingOtherItemInput.safeParse({ ...add, description: "Staging" }))).toEqual([expect.stringMatching(/^description: is too short for a yard to price/)]);
+    expect(issues(ZDockingOtherItemInput.safeParse({ ...add, description: " " }))).toEqual(["description: is required: say what the yard is to do"]);
+    expect(issues(ZDockingOtherItemInput.safeParse({ ...add, unitRate: -5 }))).toEqual(["unitRate: cannot be negative"]);
+    expect(issues(ZDockingOtherItemInput.safeParse({ ...add, unitRate: "NaN" }))).toEqual(["unitRate: must be a number: the price per unit, in the docking's currency"]);
+    expect(issues(ZDockingOtherItemInput.safeParse({ ...add, unitRate: Number.NaN }))).toHaveLength(1);
+    expect(issues(ZDockingOtherItemInput.safeParse({ ...add, quantity: Number.POSITIVE_INFINITY }))).toHaveLength(1);
+    expect(issues(ZDockingOtherItemInput.safeParse({ ...add, unitRate: 2_000_000_000 }))).toEqual(["unitRate: must be at most 1,000,000,000"]);
+    expect(issues(ZDockingOtherItemInput.safeParse({ ...add, unit: "" }))).toEqual(["unit: is required: lump sum, days, m², pcs …"]);
+    expect(issues(ZDockingOtherItemInput.safeParse({ ...add, reason: undefined }))).toEqual(["reason: is required: say why the item is added"]);
+    expect(issues(ZDockingOtherItemInput.safeParse({ ...add, tankId: "3P" }))).toEqual(["tankId: must be a tank of the vessel"]);
   });
 
   it("an adjusted quantity needs a reason; including or excluding does not", () => {

@@ -56,6 +56,33 @@ export class WorkListPage {
     await this.page.getByText("Saved; the totals are priced again.").waitFor();
   }
 
+  /** The "Add an item" form: work no finding asks for, at its own rate. */
+  addItemForm() {
+    return this.page.getByRole("form", { name: "Add an item" });
+  }
+
+  /** Fills the form (field label → value; "Tank" by its code) and sends it; waits for the answer, added or refused. */
+  async fillItem(fields: Record<string, string>) {
+    const form = this.addItemForm();
+    for (const [label, value] of Object.entries(fields)) {
+      if (label === "Tank") await form.getByLabel("Tank", { exact: true }).selectOption({ label: value });
+      else await form.getByLabel(label, { exact: true }).fill(value);
+    }
+  }
+
+  async addItem(fields: Record<string, string>) {
+    await this.fillItem(fields);
+    await this.addItemForm().getByRole("button", { name: "Add the item" }).click();
+    await this.page.getByText("Added; the totals are priced again.").waitFor();
+  }
+
+  async removeItem(description: RegExp) {
+    const row = this.page.getByTestId("work-item").filter({ hasText: description });
+    await row.getByRole("button", { name: /^Remove / }).click();
+    await row.getByRole("button", { name: /^Yes, remove / }).click();
+    await this.page.getByText("Removed; the totals are priced again.").waitFor();
+  }
+
   async startDocking() {
     await this.page.getByRole("button", { name: "Start the docking" }).click();
     await this.page.getByRole("button", { name: "Complete the docking" }).waitFor();

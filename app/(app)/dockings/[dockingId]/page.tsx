@@ -9,6 +9,7 @@ import { pageActor, pageAuthorize } from "@/lib/auth/page";
 import { formatMoney } from "@/lib/format";
 import { workListQueryFromParams } from "@/lib/schemas/docking";
 import { getDockingAs } from "@/lib/services/dockings";
+import { readVesselTanks } from "@/lib/services/tanks";
 import { DOCKING_STATUS_LABELS } from "@/lib/vocabulary";
 
 export const metadata: Metadata = { title: "Work list" };
@@ -21,6 +22,8 @@ export default async function WorkListPage({ params, searchParams }: { params: P
   const asked = workListQueryFromParams(await searchParams);
   const view = asked.success ? asked.data : { page: 1, pageSize: 100 };
   const { vessel, docking, workList, paging, unpriced, sources } = await pageAuthorize(() => getDockingAs(actor, dockingId, view));
+  // Any tank of the vessel may carry hand-added work, not only the tanks with a countersigned report.
+  const { tanks } = await readVesselTanks(actor, vessel.id);
   const hrefFor = (page: number, tank = paging.tank) => {
     const q = new URLSearchParams();
     if (tank) q.set("tank", tank);
@@ -69,6 +72,7 @@ export default async function WorkListPage({ params, searchParams }: { params: P
           itemsNote={paging.tank ? `Items of ${sources.find((s) => s.tankId === paging.tank)?.tankCode ?? "one tank"}; the totals below cover the whole list (${workList.counts.included + workList.counts.excluded} items).` : null}
           locked={locked}
           inProgress={docking.status === "in_progress"}
+          tanks={tanks.map((t) => ({ id: t.id, code: t.code }))}
           initial={{
             currency: workList.currency,
             minorUnits: workList.minorUnits,
@@ -77,6 +81,7 @@ export default async function WorkListPage({ params, searchParams }: { params: P
             items: workList.items.map((i) => ({
               id: i.id, tankCode: i.tankCode, kind: i.kind, description: i.description, unit: i.unit, quantity: i.quantity, adjustedQuantity: i.adjustedQuantity,
               adjustmentReason: i.adjustmentReason, included: i.included, quantityPriced: i.quantityPriced, unitRate: i.unitRate, cost: i.cost, done: i.doneAt !== null,
+              addedReason: i.addedReason, addedByName: i.addedByName,
             })),
           }}
         />

@@ -1,6 +1,6 @@
 import { requireActor } from "@/lib/auth/actor";
-import { readJsonValue, route } from "@/lib/http/route";
-import { decideDockingItemsAs, workListViewFromParams } from "@/lib/services/dockings";
+import { created, readJsonValue, route } from "@/lib/http/route";
+import { addDockingItemAs, decideDockingItemsAs, workListViewFromParams } from "@/lib/services/dockings";
 
 type P = { dockingId: string };
 
@@ -9,4 +9,11 @@ export const PUT = route<P>(async (req, { dockingId }) => {
   const actor = await requireActor();
   const view = workListViewFromParams(new URL(req.url).searchParams);
   return decideDockingItemsAs(actor, dockingId, await readJsonValue(req), view);
+});
+
+/** `{ description, tankId?, quantity, unit, unitRate, reason }`: adds work no finding asks for, at its own rate (201 with the docking). */
+export const POST = route<P>(async (req, { dockingId }) => {
+  const actor = await requireActor();
+  const view = workListViewFromParams(new URL(req.url).searchParams);
+  return created(await addDockingItemAs(actor, dockingId, await readJsonValue(req), view));
 });
