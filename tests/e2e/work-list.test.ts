@@ -66,6 +66,8 @@ describe("the docking work list in Chromium", () => {
     expect(await workList.grandTotal().textContent()).toContain("$3,097.35");
     expect((await workList.itemRows()).find((cells) => cells[1]!.startsWith("Staging"))?.slice(2, 5)).toEqual(["2 days", "$1,250.50", "$2,501.00"]);
     expect(await workList.addItemForm().getByLabel("Description", { exact: true }).inputValue()).toBe("");
+    // The pager above is read again from the server: 4 gathered items + 1 added.
+    await page.getByText(/^Items 1–5 of 5/).waitFor();
     await page.screenshot({ path: path.join(ARTIFACTS, "work-list.png"), fullPage: true });
 
     const { fileName, text } = await workList.exportCsv();
