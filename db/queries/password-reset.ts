@@ -111,7 +111,7 @@ export async function unsafeUseResetToken({
       .update(passwordResetTokens)
       .set({ usedAt: sql`now()` })
       .where(and(eq(passwordResetTokens.userId, userId), isNull(passwordResetTokens.usedAt), ne(passwordResetTokens.id, id)));
-    await tx.update(users).set({ passwordHash, failedSignIns: 0, lockedUntil: null, updatedAt: sql`now()` }).where(eq(users.id, userId));
+    await tx.update(users).set({ passwordHash, failedSignIns: 0, lockedUntil: null, passwordChangedAt: sql`now()`, updatedAt: sql`now()` }).where(eq(users.id, userId));
     await auditInUserOrgs(tx, userId, "password_reset", { tokenId: id });
     return { state, userId };
   });

@@ -19,9 +19,14 @@ export type TActor = {
 
 type TResolved = { actor: TActor | null; refusal?: string };
 
-async function loadActor(userId: string, orgId?: string): Promise<TActor | null> {
+const SESSION_ENDED = "Your session has ended (the account was disabled or its password was changed): sign in again.";
+
+async function loadActor(userId: string, { orgId, signedInAt }: { orgId?: string; signedInAt?: number } = {}): Promise<TActor | null> {
   const found = await getUserWithMemberships({ userId });
   if (!found || found.user.disabledAt) return null;
+  // A session signed in before the password was last set (a reset after a lost or
+  // exposed password) is no longer accepted: the next request asks to sign in again.
+  if (signedInAt !== undefined && found.user.passwordChangedAt && signedInAt < found.user.passwordChangedAt.getTime()) return null;
   return {
     userId,
     email: found.user.email,
@@ -38,12 +43,13 @@ async function loadActor(userId: string, orgId?: string): Promise<TActor | null>
 const resolveActor = cache(async (): Promise<TResolved> => {
   const session = await getServerSession(authOptions());
   const userId = session?.user?.id;
-  if (userId) return { actor: await loadActor(userId) };
+  // A session from before sign-in times were kept counts as signed in at the epoch.
+  if (userId) return { actor: await loadActor(userId, { signedInAt: session.user?.signedInAt ?? 0 }), refusal: SESSION_ENDED };
   const authorization = (await headers()).get("authorization");
   if (!authorization) return { actor: null };
   const bearer = await resolveBearer(authorization);
   if (!bearer.ok) return { actor: null, refusal: bearer.message };
-  const actor = await loadActor(bearer.userId, bearer.orgId);
+  const actor = await loadActor(bearer.userId, { orgId: bearer.orgId });
   if (!actor) return { actor: null, refusal: API_TOKEN_MESSAGES.ownerDisabled };
   return { actor: { ...actor, apiTokenId: bearer.tokenId } };
 });

@@ -25,12 +25,18 @@ export function authOptions(): NextAuthOptions {
     ],
     callbacks: {
       jwt({ token, user }) {
-        if (user) token.userId = user.id;
+        if (user) {
+          token.userId = user.id;
+          token.signedInAt = Date.now();
+        }
         return token;
       },
       session({ session, token }) {
         // Roles are not carried in the token: they are read from the database on every request.
-        if (session.user && token.userId) session.user.id = token.userId;
+        if (session.user && token.userId) {
+          session.user.id = token.userId;
+          session.user.signedInAt = token.signedInAt;
+        }
         return session;
       },
     },

@@ -5,7 +5,7 @@ import { createHash, randomBytes } from "node:crypto";
 import { and, eq } from "drizzle-orm";
 import { beforeAll, describe, expect, it } from "vitest";
 import { auditLog, passwordResetTokens, users } from "@/db/schema";
-import { anonymousClient, trySignIn } from "../fixtures/http";
+import { anonymousClient, signIn, trySignIn } from "../fixtures/http";
 import { listMail, waitForMail } from "../fixtures/mail";
 import { buildScenario, PASSWORD, testDb, type TScenario } from "../fixtures/scenario";
 import { testEnv } from "../fixtures/env";
@@ -100,6 +100,28 @@ describe("password reset by e-mail", () => {
     expect(audit).toHaveLength(1);
     expect(audit[0]!.orgId).toBe(s.org.id);
     expect(audit[0]!.actorUserId).toBe(user.id);
+  });
+
+  it("a session signed in before the reset is ended; one signed in after it works (a lost or exposed password is shut out)", async () => {
+    const user = s.otherAdmin; // an account no other test here resets
+    const before = await signIn(user.email, PASSWORD);
+    expect((await before.request("/api/v1/vessels")).status).toBe(200);
+    const pageBefore = await before.request("/fleet", { redirect: "manual" });
+    expect(pageBefore.status).toBe(200);
+
+    await sleep(5); // the reset is stamped after the sign-in, to the millisecond
+    const { token } = await linkFor(user.email);
+    expect((await confirm({ token, password: "quay-side-lantern-77", passwordAgain: "quay-side-lantern-77" })).status).toBe(200);
+
+    const refused = await before.request("/api/v1/vessels");
+    expect(refused.status).toBe(401);
+    expect(((await refused.json()) as TError).error.message).toMatch(/password was changed\): sign in again\.$/);
+    const pageAfter = await before.request("/fleet", { redirect: "manual" });
+    expect(pageAfter.status).toBe(307);
+    expect(pageAfter.headers.get("location")).toContain("/sign-in");
+
+    const after = await signIn(user.email, "quay-side-lantern-77");
+    expect((await after.request("/api/v1/vessels")).status).toBe(200);
   });
 
   it("an expired link is refused with its reason and changes nothing", async () => {
