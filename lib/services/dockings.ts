@@ -67,16 +67,18 @@ export function workListViewFromParams(params: Parameters<typeof workListQueryFr
 }
 
 const FIRST_PAGE: TWorkListQuery = { page: 1, pageSize: 100 };
+type TViewParams = TWorkListQuery | URLSearchParams;
+/** The page of items an answer carries; called once the actor is known to be allowed in, and before anything is changed. */
+const viewOf = (params: TViewParams) => (params instanceof URLSearchParams ? workListViewFromParams(params) : params);
 
 /**
  * The docking with one page of its priced work list (totals and counts over
  * every item), the tanks it was gathered from, and the open findings the yard
  * cannot price (no quantities).
  */
-export async function getDockingAs(actor: TActor, dockingId: string, params: TWorkListQuery | URLSearchParams = FIRST_PAGE) {
+export async function getDockingAs(actor: TActor, dockingId: string, params: TViewParams = FIRST_PAGE) {
   const { orgId, vessel } = await authorizeDocking(actor, dockingId);
-  // Search params are read once the actor is known to be allowed in.
-  const view = params instanceof URLSearchParams ? workListViewFromParams(params) : params;
+  const view = viewOf(params);
   const offset = (view.page - 1) * view.pageSize;
   const [docking, sums, page, sources] = await Promise.all([
     q.getDocking({ orgId, dockingId }),
@@ -111,8 +113,9 @@ export async function getDockingAs(actor: TActor, dockingId: string, params: TWo
 }
 
 /** Include, exclude or adjust items; every exclusion and adjustment needs a reason, and each change is audit-logged. */
-export async function decideDockingItemsAs(actor: TActor, dockingId: string, body: unknown, view?: TWorkListQuery) {
+export async function decideDockingItemsAs(actor: TActor, dockingId: string, body: unknown, params: TViewParams = FIRST_PAGE) {
   const { orgId } = await authorizeDocking(actor, dockingId);
+  const view = viewOf(params);
   const input = validateInput(ZDockingDecisions, body);
   const issues = input.items.flatMap((d, n) =>
     !d.included && !d.adjustmentReason ? [{ path: `items.${n}.adjustmentReason`, message: "is required: say why the item is excluded" }] : [],
@@ -131,8 +134,9 @@ export async function decideDockingItemsAs(actor: TActor, dockingId: string, bod
  * surveyor's attendance, a lump sum), priced at its own rate; audit-logged.
  * The tank, when given, must be one of the docking's vessel (400 otherwise).
  */
-export async function addDockingItemAs(actor: TActor, dockingId: string, body: unknown, view?: TWorkListQuery) {
+export async function addDockingItemAs(actor: TActor, dockingId: string, body: unknown, params: TViewParams = FIRST_PAGE) {
   const { orgId } = await authorizeDocking(actor, dockingId);
+  const view = viewOf(params);
   const input = validateInput(ZDockingOtherItemInput, body);
   const result = await q.addOtherItem({ orgId, dockingId, actorUserId: actor.userId, input });
   if (!result) throw new AppError("not_found", "No such docking.");
@@ -144,8 +148,9 @@ export async function addDockingItemAs(actor: TActor, dockingId: string, body: u
 }
 
 /** Removes an item added by hand; a gathered item cannot be removed (409: exclude it, with a reason). */
-export async function removeDockingItemAs(actor: TActor, dockingId: string, itemId: string, view?: TWorkListQuery) {
+export async function removeDockingItemAs(actor: TActor, dockingId: string, itemId: string, params: TViewParams = FIRST_PAGE) {
   const { orgId } = await authorizeDocking(actor, dockingId);
+  const view = viewOf(params);
   if (!ZId.safeParse(itemId).success) throw new AppError("not_found", "No such item in this docking.");
   const result = await q.removeOtherItem({ orgId, dockingId, actorUserId: actor.userId, itemId });
   if (!result) throw new AppError("not_found", "No such docking.");
@@ -165,8 +170,9 @@ export async function latestDockingRatesAs(actor: TActor, vesselId: string) {
 }
 
 /** Gathers the work again from the latest countersigned reports, keeping each item's decision and the work added by hand. */
-export async function rebuildDockingAs(actor: TActor, dockingId: string, view?: TWorkListQuery) {
+export async function rebuildDockingAs(actor: TActor, dockingId: string, params: TViewParams = FIRST_PAGE) {
   const { orgId } = await authorizeDocking(actor, dockingId);
+  const view = viewOf(params);
   const result = await q.rebuildDocking({ orgId, dockingId, actorUserId: actor.userId, gather });
   if (!result) throw new AppError("not_found", "No such docking.");
   if (result.locked) throw lockedError(result.locked);
@@ -182,8 +188,9 @@ export async function workListCsvAs(actor: TActor, dockingId: string) {
 
 
 /** Starts, completes or cancels the docking; a completed or cancelled docking is final. */
-export async function setDockingStatusAs(actor: TActor, dockingId: string, body: unknown, view?: TWorkListQuery) {
+export async function setDockingStatusAs(actor: TActor, dockingId: string, body: unknown, params: TViewParams = FIRST_PAGE) {
   const { orgId } = await authorizeDocking(actor, dockingId);
+  const view = viewOf(params);
   const { status } = validateInput(ZDockingStatusInput, body);
   const result = await q.setDockingStatus({ orgId, dockingId, actorUserId: actor.userId, to: status });
   if (!result) throw new AppError("not_found", "No such docking.");
@@ -195,8 +202,9 @@ export async function setDockingStatusAs(actor: TActor, dockingId: string, body:
 
 
 /** While the docking is in progress: marks included items done (closing a finding once all its items are done) or not done. */
-export async function markDockingItemsDoneAs(actor: TActor, dockingId: string, body: unknown, view?: TWorkListQuery) {
+export async function markDockingItemsDoneAs(actor: TActor, dockingId: string, body: unknown, params: TViewParams = FIRST_PAGE) {
   const { orgId } = await authorizeDocking(actor, dockingId);
+  const view = viewOf(params);
   const input = validateInput(ZDockingDoneInput, body);
   const result = await q.markItemsDone({ orgId, dockingId, actorUserId: actor.userId, itemIds: input.itemIds, done: input.done });
   if (!result) throw new AppError("not_found", "No such docking.");

@@ -149,6 +149,8 @@ describe("paging the work list", () => {
   it("does not tell a ship's officer whether a page is valid: the docking is the office's (403 first)", async () => {
     const res = await officer.request(`/api/v1/dockings/${dockingId}?page=0`);
     expect(res.status).toBe(403);
+    const write = await officer.request(`/api/v1/dockings/${dockingId}/rebuild?page=0`, { method: "POST" });
+    expect(write.status).toBe(403);
   });
 });
 
