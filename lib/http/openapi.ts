@@ -13,6 +13,7 @@ import { findingInputSchema, notInspectedInputSchema, sedimentInputSchema, ZAnod
 import { ZPasswordResetConfirm, ZPasswordResetRequest } from "@/lib/schemas/password-reset";
 import { photoCaptionSchema, ZDrawingUploadRequest, ZPhotoOrderInput, ZPhotoUploadRequest } from "@/lib/schemas/photo";
 import { ZRecipientInput } from "@/lib/schemas/recipient";
+import { ZDockingList, ZDockingWithWorkList, ZErrorBody, ZFleetOverview, ZInspectionList, ZSignedReportFingerprint, ZSigningState, ZTankList, ZVesselList } from "@/lib/schemas/responses";
 import { ZAcknowledgeInput, ZShareInput } from "@/lib/schemas/share";
 import { ZReturnInput, ZSignInput, ZVerifyInput } from "@/lib/schemas/signing";
 import { memberInputSchema, specialFrameInputSchema, tankInputSchema } from "@/lib/schemas/tank";
@@ -37,7 +38,17 @@ export type TApiOperation = {
   rawBody?: { contentTypes: string[]; description: string };
   /** The zod schema of the query string. */
   query?: z.ZodObject;
-  response: { status: number; description: string; contentType?: string };
+  /** The success answer; an operation with two (a redirect, or JSON on request) lists both. */
+  response: TResponse | TResponse[];
+};
+
+type TResponse = {
+  status: number;
+  description: string;
+  contentType?: string;
+  /** The zod schema of a JSON answer (lib/schemas/responses.ts). */
+  schema?: z.ZodType;
+  headers?: Record<string, { description: string }>;
 };
 
 // Some schemas are built per vessel or tank (frames, members); their shape is the
@@ -65,19 +76,17 @@ const SECTION_BODIES = {
   "photo-order": ZPhotoOrderInput,
 } as const;
 
-
-const ZErrorBody = z
-  .object({
-    error: z.object({
-      code: z.enum(["bad_request", "unauthenticated", "forbidden", "not_found", "conflict", "payload_too_large", "unsupported_media_type", "unprocessable", "too_many_requests", "internal"]),
-      message: z.string().describe("Safe to show to a person."),
-      issues: z.array(z.object({ path: z.string(), message: z.string() })),
-    }),
-  })
-  .describe("Every refusal: the code, a message for the user, and one issue per field that needs attention.");
-
 const PDF = "application/pdf";
-const ok = (description: string, status = 200, contentType?: string) => ({ status, description, contentType });
+const JSON_TYPE = "application/json";
+const ok = (description: string, status = 200, contentType?: string, schema?: z.ZodType): TResponse => ({ status, description, contentType, schema });
+/** A JSON answer documented by its response schema. */
+const okJson = (description: string, schema: z.ZodType, status = 200) => ok(description, status, JSON_TYPE, schema);
+/** A file download; OpenAPI 3.1 describes binary bodies by media type alone (no schema). */
+const okFile = (description: string, contentType: string, disposition: string): TResponse => ({
+  ...ok(description, 200, contentType),
+  headers: { "Content-Disposition": { description: `${disposition}, with the file's name.` } },
+});
+const redirect = (description: string): TResponse => ({ ...ok(description, 302), headers: { Location: { description: "A short-lived (presigned) storage URL." } } });
 
 export const API_OPERATIONS: TApiOperation[] = [
   // ---- account
@@ -93,11 +102,11 @@ export const API_OPERATIONS: TApiOperation[] = [
   { method: "post", path: "/api/v1/users/{userId}/memberships", tag: "Users", summary: "Grant a user a role (admin)", body: ZMembershipInput, response: ok("The new membership.", 201) },
   { method: "delete", path: "/api/v1/memberships/{membershipId}", tag: "Users", summary: "Remove a role (admin)", response: ok("The removed membership.") },
   // ---- vessels and tanks
-  { method: "get", path: "/api/v1/vessels", tag: "Vessels", summary: "The vessels you may see", response: ok("Every vessel of your company (office), or your own vessel (officer, master).") },
+  { method: "get", path: "/api/v1/vessels", tag: "Vessels", summary: "The vessels you may see", response: okJson("Every vessel of your company (office), or your own vessel (officer, master), with its number of tanks.", ZVesselList) },
   { method: "post", path: "/api/v1/vessels", tag: "Vessels", summary: "Add a vessel (admin)", body: ZVesselInput, response: ok("The new vessel.", 201) },
   { method: "get", path: "/api/v1/vessels/{vesselId}", tag: "Vessels", summary: "One vessel", response: ok("The vessel's particulars.") },
   { method: "patch", path: "/api/v1/vessels/{vesselId}", tag: "Vessels", summary: "Change a vessel's particulars", body: ZVesselInput, response: ok("The vessel as saved.") },
-  { method: "get", path: "/api/v1/vessels/{vesselId}/tanks", tag: "Tanks", summary: "The vessel's tanks", response: ok("Every tank of the vessel.") },
+  { method: "get", path: "/api/v1/vessels/{vesselId}/tanks", tag: "Tanks", summary: "The vessel's tanks", response: okJson("Every tank of the vessel.", ZTankList) },
   { method: "post", path: "/api/v1/vessels/{vesselId}/tanks", tag: "Tanks", summary: "Add a tank (frames inside the vessel's)", body: ZTank, response: ok("The new tank.", 201) },
   {
     method: "post", path: "/api/v1/vessels/{vesselId}/tanks/import", tag: "Tanks", summary: "Import tanks from CSV (preview, or write with ?commit=1)",
@@ -109,8 +118,8 @@ export const API_OPERATIONS: TApiOperation[] = [
   { method: "patch", path: "/api/v1/vessels/{vesselId}/tanks/{tankId}", tag: "Tanks", summary: "Change a tank", body: ZTank, response: ok("The tank as saved.") },
   { method: "delete", path: "/api/v1/vessels/{vesselId}/tanks/{tankId}", tag: "Tanks", summary: "Remove a tank that has no inspections", response: ok("The tank is removed.") },
   { method: "get", path: "/api/v1/vessels/{vesselId}/tanks/{tankId}/history", tag: "Tanks", summary: "A tank's history: every inspection, plotted series of the signed ones, recurring findings", response: ok("The history.") },
-  { method: "get", path: "/api/v1/vessels/{vesselId}/tanks/{tankId}/history.pdf", tag: "Tanks", summary: "A tank's history as PDF: inspections with their signed PDFs' fingerprints, the three plots, recurring findings", response: ok("The history.", 200, PDF) },
-  { method: "get", path: "/api/v1/vessels/{vesselId}/tanks/{tankId}/brief.pdf", tag: "Tanks", summary: "The pre-entry brief of a tank as PDF", response: ok("The brief.", 200, PDF) },
+  { method: "get", path: "/api/v1/vessels/{vesselId}/tanks/{tankId}/history.pdf", tag: "Tanks", summary: "A tank's history as PDF: inspections with their signed PDFs' fingerprints, the three plots, recurring findings", response: okFile("The history.", PDF, "attachment") },
+  { method: "get", path: "/api/v1/vessels/{vesselId}/tanks/{tankId}/brief.pdf", tag: "Tanks", summary: "The pre-entry brief of a tank as PDF", response: okFile("The brief.", PDF, "attachment") },
   { method: "post", path: "/api/v1/vessels/{vesselId}/tanks/{tankId}/members", tag: "Tanks", summary: "Add a structural member to the tank's catalogue", body: memberInputSchema(ANY_TANK), response: ok("The new member.", 201) },
   { method: "delete", path: "/api/v1/vessels/{vesselId}/tanks/{tankId}/members/{memberId}", tag: "Tanks", summary: "Remove a structural member", response: ok("The member is removed.") },
   { method: "post", path: "/api/v1/vessels/{vesselId}/tanks/{tankId}/special-frames", tag: "Tanks", summary: "Add a special frame (landmark)", body: specialFrameInputSchema(ANY_TANK), response: ok("The new special frame.", 201) },
@@ -127,7 +136,7 @@ export const API_OPERATIONS: TApiOperation[] = [
   { method: "put", path: "/api/v1/vessels/{vesselId}/recipients/{recipientId}", tag: "Recipients", summary: "Change a report recipient (office)", body: ZRecipientInput, response: ok("The recipient as saved.") },
   { method: "delete", path: "/api/v1/vessels/{vesselId}/recipients/{recipientId}", tag: "Recipients", summary: "Remove a report recipient (office)", response: ok("The recipient is removed.") },
   // ---- inspections
-  { method: "get", path: "/api/v1/vessels/{vesselId}/inspections", tag: "Inspections", summary: "The vessel's inspections with their status and ratings", response: ok("Every inspection of the vessel.") },
+  { method: "get", path: "/api/v1/vessels/{vesselId}/inspections", tag: "Inspections", summary: "The vessel's inspections with their status and ratings", response: okJson("The vessel's inspections, newest first, each with its tank's coating rating.", ZInspectionList) },
   { method: "post", path: "/api/v1/vessels/{vesselId}/inspections", tag: "Inspections", summary: "Start an inspection (officer, master)", body: ZInspectionStart, response: ok("The new inspection.", 201) },
   { method: "get", path: "/api/v1/inspections/{inspectionId}", tag: "Inspections", summary: "One inspection with every part", response: ok("The inspection as the wizard reads it.") },
   {
@@ -154,12 +163,15 @@ export const API_OPERATIONS: TApiOperation[] = [
   { method: "post", path: "/api/v1/inspections/{inspectionId}/countersign", tag: "Reports", summary: "Countersign (master): the signed PDF is rendered and sent", body: ZSignInput, response: ok("The inspection, countersigned.") },
   { method: "get", path: "/api/v1/inspections/{inspectionId}/revisions", tag: "Reports", summary: "Every revision of the report", response: ok("The revisions.") },
   { method: "post", path: "/api/v1/inspections/{inspectionId}/revisions", tag: "Reports", summary: "Open a new revision of a countersigned report", response: ok("The new revision.", 201) },
-  { method: "get", path: "/api/v1/inspections/{inspectionId}/signatures", tag: "Reports", summary: "Signatures, return comments and the signed PDF's fingerprint", response: ok("The signing state.") },
-  { method: "get", path: "/api/v1/inspections/{inspectionId}/report", tag: "Reports", summary: "The report as it stands (draft mark until countersigned)", response: ok("The PDF.", 200, PDF) },
+  { method: "get", path: "/api/v1/inspections/{inspectionId}/signatures", tag: "Reports", summary: "Signatures, return comments and the signed PDF's fingerprint", response: okJson("The signing state: signatures, return comments, the signed PDF's fingerprint and every revision.", ZSigningState) },
+  { method: "get", path: "/api/v1/inspections/{inspectionId}/report", tag: "Reports", summary: "The report as it stands (draft mark until countersigned)", response: okFile("The PDF, rendered now (not the stored signed PDF, whose fingerprint is at …/signed-report?format=json).", PDF, "inline") },
   {
     method: "get", path: "/api/v1/inspections/{inspectionId}/signed-report", tag: "Reports", summary: "The signed PDF, or with ?format=json its SHA-256 fingerprint and size",
-    query: z.object({ format: z.enum(["json"]).optional() }),
-    response: ok("Redirect (302) to the stored PDF; with format=json the report's fingerprint.", 302),
+    query: z.object({ format: z.enum(["json"]).optional().describe("json: the fingerprint and size instead of the PDF.") }),
+    response: [
+      redirect("Redirect (302) to the stored signed PDF (application/pdf); 404 until it is rendered."),
+      okJson("With format=json: the signed PDF's SHA-256 fingerprint, size and time, or null before it is rendered.", ZSignedReportFingerprint),
+    ],
   },
   { method: "get", path: "/api/v1/inspections/{inspectionId}/deliveries", tag: "Reports", summary: "The e-mail deliveries of the signed report", response: ok("Each recipient and every try.") },
   { method: "post", path: "/api/v1/deliveries/{deliveryId}/resend", tag: "Reports", summary: "Send the signed report to a recipient again", response: ok("The new delivery.", 201) },
@@ -183,23 +195,25 @@ export const API_OPERATIONS: TApiOperation[] = [
   { method: "get", path: "/api/v1/shares/{shareId}/report", tag: "Sharing", summary: "The shared report's signed PDF (surveyor)", response: ok("Redirect (302) to a short-lived storage URL.", 302) },
   { method: "post", path: "/api/v1/shares/{shareId}/acknowledge", tag: "Sharing", summary: "Acknowledge a shared report, with an optional comment (surveyor)", body: ZAcknowledgeInput, response: ok("The acknowledgement; once.") },
   // ---- fleet
-  { method: "get", path: "/api/v1/fleet", tag: "Fleet", summary: "The fleet overview: each tank's latest countersigned rating and due date, one page", query: ZFleetQuery, response: ok("Counts, and one page of tanks with rating, last inspection, next due date and overdue mark.") },
+  { method: "get", path: "/api/v1/fleet", tag: "Fleet", summary: "The fleet overview: each tank's latest countersigned rating and due date, one page", query: ZFleetQuery, response: okJson("Counts, and one page of tanks with rating, last inspection, next due date and overdue mark.", ZFleetOverview) },
   // ---- dockings (office)
-  { method: "get", path: "/api/v1/vessels/{vesselId}/dockings", tag: "Dockings", summary: "The vessel's dockings, latest planned first (office)", response: ok("Every docking of the vessel.") },
+  { method: "get", path: "/api/v1/vessels/{vesselId}/dockings", tag: "Dockings", summary: "The vessel's dockings, latest planned first (office)", response: okJson("Every docking of the vessel with its rates and status.", ZDockingList) },
   { method: "post", path: "/api/v1/vessels/{vesselId}/dockings", tag: "Dockings", summary: "Plan a docking with its unit rates; its work list is gathered", body: ZDockingInput, response: ok("The new docking.", 201) },
-  { method: "get", path: "/api/v1/dockings/{dockingId}", tag: "Dockings", summary: "A docking with one page of its priced work list", query: ZWorkListQuery, response: ok("The docking, one page of items (optionally one tank's) with the cost of each, and the totals over every item.") },
+  { method: "get", path: "/api/v1/dockings/{dockingId}", tag: "Dockings", summary: "A docking with one page of its priced work list", query: ZWorkListQuery, response: okJson("The docking, one page of items (optionally one tank's) with the cost of each, and the totals over every item.", ZDockingWithWorkList) },
   { method: "put", path: "/api/v1/dockings/{dockingId}/items", tag: "Dockings", summary: "Include, exclude or adjust work-list items, with a reason", query: ZWorkListQuery, body: ZDockingDecisions, response: ok("The docking as saved, with the page of items asked for.") },
   { method: "post", path: "/api/v1/dockings/{dockingId}/items", tag: "Dockings", summary: "Add work no finding asks for (staging, gas-freeing, cleaning, attendance, a lump sum) at its own unit rate, with a reason", query: ZWorkListQuery, body: ZDockingOtherItemInput, response: ok("The new item's id and the docking, with the page of items asked for.", 201) },
   { method: "delete", path: "/api/v1/dockings/{dockingId}/items/{itemId}", tag: "Dockings", summary: "Remove an item added by hand (a gathered item is excluded instead: 409)", query: ZWorkListQuery, response: ok("The docking, with the page of items asked for.") },
   { method: "post", path: "/api/v1/dockings/{dockingId}/rebuild", tag: "Dockings", summary: "Gather the work list again from the latest countersigned reports", query: ZWorkListQuery, response: ok("The docking; decisions stay with their items.") },
-  { method: "get", path: "/api/v1/dockings/{dockingId}/work-list.csv", tag: "Dockings", summary: "The priced work list as CSV", response: ok("Header, one row per item, totals per kind and the grand total.", 200, "text/csv") },
+  { method: "get", path: "/api/v1/dockings/{dockingId}/work-list.csv", tag: "Dockings", summary: "The priced work list as CSV", response: okFile("Header, one row per item, totals per kind and the grand total.", "text/csv", "attachment") },
   { method: "put", path: "/api/v1/dockings/{dockingId}/status", tag: "Dockings", summary: "Start, complete or cancel a docking; completed and cancelled are final", query: ZWorkListQuery, body: ZDockingStatusInput, response: ok("The docking with its new status.") },
   { method: "put", path: "/api/v1/dockings/{dockingId}/done", tag: "Dockings", summary: "Mark items done while the docking is in progress; a finding closes when all its items are done", query: ZWorkListQuery, body: ZDockingDoneInput, response: ok("The closed and reopened findings, and the docking.") },
-  { method: "get", path: "/api/v1/dockings/{dockingId}/work-list.pdf", tag: "Dockings", summary: "The priced work list as PDF", response: ok("Items, totals per kind and the grand total.", 200, "application/pdf") },
+  { method: "get", path: "/api/v1/dockings/{dockingId}/work-list.pdf", tag: "Dockings", summary: "The priced work list as PDF", response: okFile("Items, totals per kind and the grand total.", PDF, "attachment") },
   { method: "get", path: "/api/v1/openapi.json", tag: "API", auth: "public", summary: "This document", response: ok("The OpenAPI 3.1 document.") },
 ];
 
-const JSON_SCHEMA_OPTIONS = { target: "draft-2020-12", io: "input", unrepresentable: "any" } as const;
+const JSON_SCHEMA_OPTIONS = { target: "draft-2020-12", unrepresentable: "any" } as const;
+/** "input" for what a request may send (defaults may be left out), "output" for what a response carries. */
+type TSchemaIo = "input" | "output";
 
 type TJson = Record<string, unknown>;
 
@@ -217,8 +231,8 @@ function renameRefs(value: unknown, names: Map<string, string>): unknown {
  * $schema). Definitions zod puts in `$defs` (recursive schemas such as the remarks'
  * rich text) move to `components` (the same definition once), so every `$ref` resolves.
  */
-export function toSchemaObject(schema: z.ZodType, components: TJson = {}): TJson {
-  const { $schema: _drop, $defs, ...rest } = z.toJSONSchema(schema, JSON_SCHEMA_OPTIONS) as TJson & { $defs?: Record<string, TJson> };
+export function toSchemaObject(schema: z.ZodType, components: TJson = {}, io: TSchemaIo = "input"): TJson {
+  const { $schema: _drop, $defs, ...rest } = z.toJSONSchema(schema, { ...JSON_SCHEMA_OPTIONS, io }) as TJson & { $defs?: Record<string, TJson> };
   if (!$defs) return rest;
   const names = new Map<string, string>();
   for (const key of Object.keys($defs)) {
@@ -256,15 +270,53 @@ const SECURITY: Record<TAuth, Record<string, string[]>[]> = {
 
 const errorResponse = (description: string) => ({ description, content: { "application/json": { schema: { $ref: "#/components/schemas/ErrorBody" } } } });
 
+/** Response schemas by their name under components.schemas: each is written once and referred to by $ref. */
+const RESPONSE_SCHEMAS = new Map<z.ZodType, string>([
+  [ZVesselList, "VesselList"],
+  [ZTankList, "TankList"],
+  [ZInspectionList, "InspectionList"],
+  [ZSigningState, "SigningState"],
+  [ZSignedReportFingerprint, "SignedReportFingerprint"],
+  [ZFleetOverview, "FleetOverview"],
+  [ZDockingList, "DockingList"],
+  [ZDockingWithWorkList, "DockingWithWorkList"],
+]);
+
+function responseSchema(schema: z.ZodType, components: TJson) {
+  const name = RESPONSE_SCHEMAS.get(schema);
+  if (!name) return toSchemaObject(schema, components, "output");
+  components[name] ??= toSchemaObject(schema, components, "output");
+  return { $ref: `#/components/schemas/${name}` };
+}
+
+function successResponse(r: TResponse, components: TJson) {
+  const headers = r.headers ? Object.fromEntries(Object.entries(r.headers).map(([name, h]) => [name, { description: h.description, schema: { type: "string" } }])) : undefined;
+  const content = r.contentType ? { [r.contentType]: r.schema ? { schema: responseSchema(r.schema, components) } : {} } : undefined;
+  return { description: r.description, ...(headers ? { headers } : {}), ...(content ? { content } : {}) };
+}
+
+/** The refusals an operation can answer with, each with the one error body. */
+function refusals(op: TApiOperation, auth: TAuth) {
+  const takesInput = Boolean(op.body || op.rawBody || op.query);
+  return {
+    ...(takesInput ? { "400": errorResponse("The body or query is not valid: `issues` names each field.") } : {}),
+    ...(auth === "public" ? {} : { "401": errorResponse("No session, or a missing, malformed, unknown or revoked API token.") }),
+    ...(auth === "public" ? {} : { "403": errorResponse("Your role does not allow this.") }),
+    ...(op.path.includes("{") ? { "404": errorResponse("No such record, or one of another company or vessel than yours.") } : {}),
+    ...(op.method !== "get" && auth !== "public" ? { "409": errorResponse("Someone else changed it in the meantime, the record is locked, or the value is already used.") } : {}),
+    ...(op.body || op.rawBody ? { "422": errorResponse("The entry cannot be accepted as it is: `issues` says why.") } : {}),
+    default: errorResponse("Another refusal (413, 415, 429) or an error, with a message safe to show."),
+  };
+}
+
 function operationObject(op: TApiOperation, components: TJson) {
   const auth = op.auth ?? "session-or-token";
   const content: Record<string, unknown> = {};
   if (op.body) content["application/json"] = { schema: toSchemaObject(op.body, components) };
   for (const type of op.rawBody?.contentTypes ?? []) content[type] = { schema: { description: op.rawBody!.description } };
   const responses: Record<string, unknown> = {
-    [String(op.response.status)]: { description: op.response.description, ...(op.response.contentType ? { content: { [op.response.contentType]: {} } } : {}) },
-    ...(auth === "public" ? {} : { "401": errorResponse("No session, or a missing, malformed, unknown or revoked API token.") }),
-    default: errorResponse("A refusal (400, 403, 404, 409, 413, 415, 422, 429) or an error, with a message safe to show."),
+    ...Object.fromEntries([op.response].flat().map((r) => [String(r.status), successResponse(r, components)])),
+    ...refusals(op, auth),
   };
   return {
     operationId: `${op.method}${op.path.replace(/^\/api\/v1/, "").replace(/[{}]/g, "").replace(/[^A-Za-z0-9]+(.)?/g, (_m, c: string | undefined) => (c ?? "").toUpperCase())}`,
@@ -280,7 +332,7 @@ function operationObject(op: TApiOperation, components: TJson) {
 /** The OpenAPI 3.1 document of /api/v1. */
 export function buildOpenApiDocument() {
   const paths: Record<string, Record<string, unknown>> = {};
-  const schemas: TJson = { ErrorBody: toSchemaObject(ZErrorBody) };
+  const schemas: TJson = { ErrorBody: toSchemaObject(ZErrorBody, {}, "output") };
   for (const op of API_OPERATIONS) (paths[op.path] ??= {})[op.method] = operationObject(op, schemas);
   return {
     openapi: "3.1.1",

@@ -2,6 +2,7 @@ import "server-only";
 import { NextResponse } from "next/server";
 import type { z } from "zod";
 import { AppError, databaseErrorCode, errorBody, issuesFromZod } from "@/lib/errors";
+import type { TErrorBodyResponse } from "@/lib/schemas/responses";
 
 type TParams = Record<string, string | string[]>;
 type THandler<P extends TParams> = (req: Request, params: P) => Promise<Response | unknown>;
@@ -25,7 +26,7 @@ export function toAppError(error: unknown): AppError {
 
 export function errorResponse(error: unknown): Response {
   const appError = toAppError(error);
-  return NextResponse.json(errorBody(appError), { status: appError.status });
+  return NextResponse.json(errorBody(appError) satisfies TErrorBodyResponse, { status: appError.status });
 }
 
 /**

@@ -14,6 +14,7 @@ import { rateCoatingArea, rateTank, type TRating, type TTwentyPercentRule } from
 import { AppError } from "@/lib/errors";
 import { annualExaminationTriggers, nextInspectionDue, type TDueDate, type TDueReason } from "@/lib/office/due-dates";
 import { fleetQueryFromParams, type TFleetQuery } from "@/lib/schemas/fleet";
+import type { TFleetOverviewResponse, TServed } from "@/lib/schemas/responses";
 import { COATING_AREA_LABELS, type TCoatingArea } from "@/lib/vocabulary";
 
 /** Who may open a vessel's overview: its officer and master, and the office. */
@@ -138,6 +139,6 @@ export async function getFleetOverviewAs(actor: TActor, query: TFleetQuery, toda
     counts,
     paging: { page: query.page, pageSize: query.pageSize, matching: counts.matching, totalPages },
     tanks,
-  };
+  } satisfies TServed<TFleetOverviewResponse>;
 }
 export type TFleetOverview = Awaited<ReturnType<typeof getFleetOverviewAs>>;

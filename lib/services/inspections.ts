@@ -3,6 +3,7 @@ import { createHash } from "node:crypto";
 import { db } from "@/db";
 import * as q from "@/db/queries/inspections";
 import * as photoQ from "@/db/queries/photos";
+import { listCoatingForInspections } from "@/db/queries/fleet";
 import { getOrgSettings } from "@/db/queries/organisations";
 import { getTank, getTankCatalogue, toCatalogue } from "@/db/queries/tanks";
 import { projectThresholdDate, unusedAnodeWarning } from "@/lib/calc/anodes";
@@ -19,6 +20,7 @@ import { reportOrder } from "@/lib/photos/order";
 import { publicPhoto } from "@/lib/photos/public";
 import { judgeReading, ruleSet } from "@/lib/safety/atmosphere";
 import { photoCaptionSchema, ZPhotoOrderInput } from "@/lib/schemas/photo";
+import type { TInspectionList, TServed } from "@/lib/schemas/responses";
 import { deleteObjects } from "@/lib/storage/s3";
 import {
   findingInputSchema,
@@ -54,9 +56,17 @@ export async function startInspectionAs(actor: TActor, vesselId: string, body: u
   });
 }
 
+/** The vessel's inspections, each with its tank's coating rating (worst area; null without a coating record). */
 export async function listInspectionsAs(actor: TActor, vesselId: string) {
   const { orgId } = await authorizeVessel({ actor, vesselId, allow: VESSEL_READERS });
-  return q.listVesselInspections({ orgId, vesselId });
+  const [rows, settings] = await Promise.all([q.listVesselInspections({ orgId, vesselId }), getOrgSettings({ orgId })]);
+  const rule = settings?.twentyPercentRule ?? "table";
+  const coating = await listCoatingForInspections({ orgId, inspectionIds: rows.map((r) => r.id) });
+  const inspections = rows.map((row) => {
+    const areas = coating.filter((c) => c.inspectionId === row.id).map((c) => ({ ...c, rating: rateCoatingArea(c, rule) }));
+    return { ...row, rating: rateTank(areas)?.rating ?? null };
+  });
+  return inspections satisfies TServed<TInspectionList["inspections"]>;
 }
 
 /** The whole inspection with everything the product computes from it. */
