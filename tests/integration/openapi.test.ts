@@ -1,5 +1,6 @@
 // The OpenAPI document at /api/v1/openapi.json: generated from the request schemas,
 // valid OpenAPI 3.1, and listing exactly the route handlers under app/api/v1.
+// openapi-responses.test.ts checks the documented answers against real ones.
 import { readdirSync, readFileSync } from "node:fs";
 import path from "node:path";
 import { z } from "zod";
@@ -9,7 +10,13 @@ import { ZVesselInput } from "@/lib/schemas/vessel";
 import { anonymousClient } from "../fixtures/http";
 
 type TJson = Record<string, unknown>;
-type TOperation = { operationId: string; parameters: { name: string; in: string; required?: boolean; schema: TJson }[]; requestBody?: { content: Record<string, { schema?: TJson }> }; responses: Record<string, TJson>; security?: Record<string, string[]>[] };
+type TOperation = {
+  operationId: string;
+  parameters: { name: string; in: string; required?: boolean; schema: TJson }[];
+  requestBody?: { content: Record<string, { schema?: TJson }> };
+  responses: Record<string, TJson & { content?: Record<string, { schema?: TJson }> }>;
+  security?: Record<string, string[]>[];
+};
 type TDocument = { openapi: string; info: { title: string; version: string }; paths: Record<string, Record<string, TOperation>>; components: { schemas: Record<string, TJson>; securitySchemes: Record<string, TJson> } };
 
 const API_ROOT = path.join(import.meta.dirname, "../../app/api/v1");
@@ -70,6 +77,9 @@ beforeAll(async () => {
     for (const [method, op] of Object.entries(item)) {
       for (const [type, media] of Object.entries(op.requestBody?.content ?? {})) if (media.schema) schemas.push({ where: `${method} ${p} body ${type}`, schema: media.schema });
       for (const param of op.parameters) schemas.push({ where: `${method} ${p} parameter ${param.name}`, schema: param.schema });
+      for (const [status, response] of Object.entries(op.responses)) {
+        for (const [type, media] of Object.entries(response.content ?? {})) if (media.schema) schemas.push({ where: `${method} ${p} response ${status} ${type}`, schema: media.schema });
+      }
     }
   }
   for (const [name, schema] of Object.entries(doc.components.schemas)) schemas.push({ where: `components.schemas.${name}`, schema });
