@@ -5,6 +5,5 @@ import { getDockingAs } from "@/lib/services/dockings";
 
 type P = { dockingId: string };
 
-/** The docking with its priced work list. */
 /** The docking with one page of its priced work list (?tank=&page=&pageSize=; the totals cover every item). */
 export const GET = route<P>(async (req, { dockingId }) => (await getDockingAs(await requireActor(), dockingId, new URL(req.url).searchParams)) satisfies TServed<TDockingWithWorkList>);
