@@ -14,14 +14,15 @@ export async function unsafeGetUserByEmail({ email }: { email: string }) {
   return db().query.users.findFirst({ where: eq(users.email, email.trim().toLowerCase()) });
 }
 
+/** A user and every membership they hold, in one round trip (read on every request by lib/auth/actor.ts). */
 export async function getUserWithMemberships({ userId }: { userId: string }) {
-  const user = await db().query.users.findFirst({ where: eq(users.id, userId) });
-  if (!user) return undefined;
   const rows = await db()
-    .select({ id: memberships.id, orgId: memberships.orgId, role: memberships.role, vesselId: memberships.vesselId })
-    .from(memberships)
-    .where(eq(memberships.userId, userId));
-  return { user, memberships: rows as TMembership[] };
+    .select({ user: users, membership: { id: memberships.id, orgId: memberships.orgId, role: memberships.role, vesselId: memberships.vesselId } })
+    .from(users)
+    .leftJoin(memberships, eq(memberships.userId, users.id))
+    .where(eq(users.id, userId));
+  if (!rows.length) return undefined;
+  return { user: rows[0]!.user, memberships: rows.flatMap((r) => (r.membership ? [r.membership as TMembership] : [])) };
 }
 
 /** Records a failed sign-in; after the fifth in a row the account waits, longer each time. */
