@@ -21,9 +21,9 @@ export function AcknowledgeForm({ shareId }: { shareId: string }) {
   }
   return (
     <form onSubmit={send} className="flex flex-wrap items-end gap-2" aria-label="Acknowledge the report">
-      <label className="text-sm">
+      <label className="min-w-0 flex-1 basis-56 text-sm">
         <span className="sr-only">Comment (optional)</span>
-        <input value={comment} onChange={(e) => setComment(e.target.value)} placeholder="Comment (optional)" className="rounded-md border border-slate-300 px-2 py-1" maxLength={2000} />
+        <input value={comment} onChange={(e) => setComment(e.target.value)} placeholder="Comment (optional)" className="w-full rounded-md border border-slate-300 px-2 py-1" maxLength={2000} />
       </label>
       <Button type="submit" variant="secondary" className="min-h-8 px-2 py-1" disabled={busy}>Acknowledge</Button>
       {error ? <span role="alert" className="text-sm text-red-800">{error}</span> : null}

@@ -62,20 +62,22 @@ function stateOf(row: { expiresAt: Date; usedAt: Date | null; disabledAt: Date |
 }
 
 /** What a token is worth now, without using it (for the reset page). */
-export async function unsafeGetResetTokenState({ tokenHash }: { tokenHash: string }): Promise<{ state: TResetTokenState; email?: string }> {
+export async function unsafeGetResetTokenState({ tokenHash }: { tokenHash: string }): Promise<{ state: TResetTokenState; email?: string; firstPassword?: boolean }> {
   const [row] = await db()
     .select({
       expiresAt: passwordResetTokens.expiresAt,
       usedAt: passwordResetTokens.usedAt,
       disabledAt: users.disabledAt,
       email: users.email,
+      // An invited user who has never signed in nor chosen a password: the link sets their first one.
+      firstPassword: sql<boolean>`${users.lastSignInAt} is null and ${users.passwordChangedAt} is null`,
       now: sql<Date>`now()`.mapWith(passwordResetTokens.expiresAt),
     })
     .from(passwordResetTokens)
     .innerJoin(users, eq(users.id, passwordResetTokens.userId))
     .where(eq(passwordResetTokens.tokenHash, tokenHash));
   const state = stateOf(row);
-  return state === "unknown" ? { state } : { state, email: row!.email };
+  return state === "unknown" ? { state } : { state, email: row!.email, firstPassword: row!.firstPassword };
 }
 
 /**

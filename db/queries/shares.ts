@@ -9,6 +9,8 @@ export async function listSharesForSurveyor({ surveyorUserId }: { surveyorUserId
   return db()
     .select({
       shareId: reportShares.id,
+      orgId: reportShares.orgId,
+      inspectionId: reportShares.inspectionId,
       sharedAt: reportShares.sharedAt,
       acknowledgedAt: reportShares.acknowledgedAt,
       acknowledgementComment: reportShares.acknowledgementComment,

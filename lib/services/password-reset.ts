@@ -32,6 +32,7 @@ export const RESET_TOKEN_MESSAGES: Record<Exclude<TResetTokenState, "valid">, st
 };
 
 export const RESET_DONE_MESSAGE = "Your password has been changed. Sign in with the new password.";
+export const FIRST_PASSWORD_DONE_MESSAGE = "Your password is set. Sign in with it.";
 
 /** 32 random bytes as base64url (43 characters); only its SHA-256 is stored. */
 export function newResetToken(): { token: string; tokenHash: string } {
@@ -81,7 +82,7 @@ export async function requestPasswordReset(body: unknown): Promise<{ message: st
 }
 
 /** For the reset page: whether the link still works, and for which address. */
-export async function checkResetToken(token: unknown): Promise<{ state: TResetTokenState; email?: string; message?: string }> {
+export async function checkResetToken(token: unknown): Promise<{ state: TResetTokenState; email?: string; firstPassword?: boolean; message?: string }> {
   const parsed = ZResetToken.safeParse(token);
   if (!parsed.success) return { state: "unknown", message: RESET_TOKEN_MESSAGES.unknown };
   const found = await unsafeGetResetTokenState({ tokenHash: hashResetToken(parsed.data) });
@@ -99,7 +100,7 @@ export async function resetPassword(body: unknown): Promise<{ message: string }>
   if (before.state !== "valid") throw tokenRefused(before.state);
   const result = await unsafeUseResetToken({ tokenHash, passwordHash: await hashPassword(input.password) });
   if (result.state !== "valid") throw tokenRefused(result.state);
-  return { message: RESET_DONE_MESSAGE };
+  return { message: before.firstPassword ? FIRST_PASSWORD_DONE_MESSAGE : RESET_DONE_MESSAGE };
 }
 
 function tokenRefused(state: Exclude<TResetTokenState, "valid">): AppError {

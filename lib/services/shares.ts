@@ -4,13 +4,15 @@ import "server-only";
 // acknowledges it; the office sees who acknowledged what and when.
 import { z } from "zod";
 import { randomBytes } from "node:crypto";
-import { getOrganisation } from "@/db/queries/organisations";
+import { listCoatingForInspections } from "@/db/queries/fleet";
+import { getOrganisation, getOrgSettings } from "@/db/queries/organisations";
 import { unsafeIssueResetToken } from "@/db/queries/password-reset";
 import { addMembership, createOrgUser, getUserWithMemberships, unsafeGetUserByEmail } from "@/db/queries/users";
 import { hashPassword } from "@/lib/auth/password";
 import * as q from "@/db/queries/shares";
 import { getInspectionSummary, getReportFile } from "@/db/queries/signing";
 import type { TActor } from "@/lib/auth/actor";
+import { rateCoatingArea, rateTank, type TRating } from "@/lib/calc/coating";
 import { authorizeInspection, authorizeOrg } from "@/lib/auth/authorize";
 import { serverEnv } from "@/lib/env";
 import { reportFileName } from "@/lib/format";
@@ -101,10 +103,22 @@ export async function unshareReportAs(actor: TActor, inspectionId: string, share
   return { ok: true };
 }
 
-/** The surveyor's own list: every report shared with them, in every company. */
+/**
+ * The surveyor's own list: every report shared with them, in every company,
+ * each with the coating rating the signed report states (worst area, under the
+ * company's reading of the 20 % boundary; null without a coating record).
+ */
 export async function listMySharesAs(actor: TActor) {
   await authorizeOrg({ actor, allow: ["surveyor"] });
-  return q.listSharesForSurveyor({ surveyorUserId: actor.userId });
+  const shares = await q.listSharesForSurveyor({ surveyorUserId: actor.userId });
+  const rating = new Map<string, TRating | null>();
+  for (const orgId of new Set(shares.map((x) => x.orgId))) {
+    const ids = shares.filter((x) => x.orgId === orgId).map((x) => x.inspectionId);
+    const [settings, coating] = await Promise.all([getOrgSettings({ orgId }), listCoatingForInspections({ orgId, inspectionIds: ids })]);
+    const rule = settings?.twentyPercentRule ?? "table";
+    for (const id of ids) rating.set(id, rateTank(coating.filter((c) => c.inspectionId === id).map((c) => ({ ...c, rating: rateCoatingArea(c, rule) })))?.rating ?? null);
+  }
+  return shares.map((x) => ({ ...x, rating: rating.get(x.inspectionId) ?? null }));
 }
 
 async function ownShare(actor: TActor, shareId: string) {

@@ -6,7 +6,8 @@ import { afterAll, beforeAll, describe, expect, it } from "vitest";
 import { launchBrowser } from "../fixtures/browser";
 import { testEnv } from "../fixtures/env";
 import { waitForMail } from "../fixtures/mail";
-import { buildScenario, type TScenario } from "../fixtures/scenario";
+import { trySignIn } from "../fixtures/http";
+import { buildScenario, PASSWORD, type TScenario } from "../fixtures/scenario";
 import { SignInPage } from "./pages/sign-in-page";
 
 const ARTIFACTS = path.join(import.meta.dirname, "..", "artifacts");
@@ -25,6 +26,8 @@ describe("password reset in Chromium", () => {
   it("e-mails a link that sets a new password once", async () => {
     const { baseUrl } = testEnv();
     const email = s.users.surveyor.email;
+    // Someone who has used the account before forgets the password (a never-used account is asked to "Choose your password").
+    expect((await trySignIn(email, PASSWORD)).signedIn).toBe(true);
     const page = await browser.newPage({ viewport: { width: 768, height: 1024 } });
     await page.goto(`${baseUrl}/sign-in`);
     await page.getByRole("link", { name: "Forgot your password?" }).click();

@@ -4,7 +4,7 @@
 import { createHash } from "node:crypto";
 import { eq } from "drizzle-orm";
 import { beforeAll, describe, expect, it } from "vitest";
-import { inspections, memberships, reportShares, users } from "@/db/schema";
+import { coatingAreas, inspections, memberships, reportShares, users } from "@/db/schema";
 import { anonymousClient, signIn, trySignIn, type TClient } from "../fixtures/http";
 import { waitForMail } from "../fixtures/mail";
 import { buildScenario, PASSWORD, testDb, type TScenario } from "../fixtures/scenario";
@@ -19,7 +19,7 @@ let shared = "";
 let notShared = "";
 const pdfOf = (label: string) => Buffer.from(`%PDF-1.7\n% ${label}\n%%EOF\n`, "latin1");
 type TErr = { error: { message: string; issues: { path: string }[] } };
-type TMine = { shares: { shareId: string; vessel: string; sha256: string | null; acknowledgedAt: string | null }[] };
+type TMine = { shares: { shareId: string; vessel: string; sha256: string | null; acknowledgedAt: string | null; rating: string | null }[] };
 
 /** A countersigned inspection with its signed PDF in storage, as the rendering job leaves it. */
 async function countersigned(inspectionId: string, vesselId: string, label: string) {
@@ -59,9 +59,16 @@ describe("sharing a report with class", () => {
   });
 
   it("the surveyor sees exactly what was shared, reads its signed PDF, and nothing else", async () => {
+    // The signed report's coating: shell plating 4 % breakdown is FAIR (3–20 %), the rest 1 % GOOD; the tank takes
+    // its worst area (IMO MSC.1/Circ.1330 §4.1.3 Table 1), so the surveyor's list says FAIR.
+    await testDb().insert(coatingAreas).values([
+      { orgId: s.org.id, inspectionId: shared, area: "shell_plating", breakdownPct: 4, rustedPct: 0, hardScalePct: 0 },
+      { orgId: s.org.id, inspectionId: shared, area: "bulkhead_plating", breakdownPct: 1, rustedPct: 0, hardScalePct: 0 },
+    ]);
     const mine = (await (await surveyor.request("/api/v1/shares")).json()) as TMine;
     expect(mine.shares.map((x) => x.vessel)).toEqual([s.ownVessel.name]);
     const share = mine.shares[0]!;
+    expect(share.rating).toBe("FAIR");
     expect(share.sha256).toBe(createHash("sha256").update(pdfOf("shared")).digest("hex"));
     const pdf = await surveyor.request(`/api/v1/shares/${share.shareId}/report`);
     expect(pdf.status).toBe(302);
@@ -105,8 +112,13 @@ describe("sharing a report with class", () => {
     const token = decodeURIComponent(mail.text.match(/reset-password\?token=([A-Za-z0-9_%-]+)/)![1]!);
     // No password works until the surveyor chooses one.
     expect((await trySignIn(email, "")).signedIn).toBe(false);
+    // The link sets a first password, and says so (not "a new password").
+    const html = await (await anonymousClient().request(`/reset-password?token=${encodeURIComponent(token)}`)).text();
+    expect(html).toContain("Choose your password");
+    expect(html).not.toContain("Choose a new password");
     const set = await anonymousClient().request("/api/v1/password-reset/confirm", { method: "POST", json: { token, password: "surveyor-chosen-password", passwordAgain: "surveyor-chosen-password" } });
     expect(set.status).toBe(200);
+    expect(((await set.json()) as { message: string }).message).toBe("Your password is set. Sign in with it.");
     const invited = await signIn(email, "surveyor-chosen-password");
     expect(((await (await invited.request("/api/v1/shares")).json()) as TMine).shares.map((x) => x.vessel)).toEqual([s.ownVessel.name]);
   });

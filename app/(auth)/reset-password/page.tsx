@@ -4,7 +4,7 @@ import { ResetPasswordForm } from "@/components/auth/reset-password-form";
 import { Notice } from "@/components/ui/notice";
 import { checkResetToken } from "@/lib/services/password-reset";
 
-export const metadata: Metadata = { title: "Choose a new password" };
+export const metadata: Metadata = { title: "Choose a password" };
 
 /** Public: opened from the e-mailed link. The token itself is the permission; the page only looks, it uses nothing. */
 export default async function ResetPasswordPage({ searchParams }: { searchParams: Promise<Record<string, string | string[] | undefined>> }) {
@@ -14,10 +14,12 @@ export default async function ResetPasswordPage({ searchParams }: { searchParams
     <main className="mx-auto flex min-h-screen max-w-md flex-col justify-center px-4 py-12">
       <div className="rounded-xl border border-slate-200 bg-white p-8 shadow-sm">
         <p className="text-sm font-semibold uppercase tracking-widest text-hull-600">Tankwright</p>
-        <h1 className="mb-1 mt-2 text-2xl font-bold text-hull-900">Choose a new password</h1>
+        <h1 className="mb-1 mt-2 text-2xl font-bold text-hull-900">{check.firstPassword ? "Choose your password" : "Choose a new password"}</h1>
         {check.state === "valid" && typeof token === "string" ? (
           <>
-            <p className="mb-6 text-sm text-slate-600">For {check.email}. Type the new password twice.</p>
+            <p className="mb-6 text-sm text-slate-600">
+              For {check.email}. {check.firstPassword ? "Your account is ready: type the password you want to sign in with, twice." : "Type the new password twice."}
+            </p>
             <ResetPasswordForm token={token} email={check.email ?? ""} />
           </>
         ) : (
