@@ -125,11 +125,11 @@ for (let v = 0; v < VESSELS; v++) {
       }
       const toRenew = Math.floor(rand() * 6);
       anodeRows.push({ orgId, inspectionId, anodeKind: "aluminium", installedCount: 24, inspectedCount: 24, meanWastagePct: round(10 + n * 6 + rand() * 5), minWastagePct: 5, maxWastagePct: round(30 + n * 6), toRenewCount: toRenew });
-      const zones: { depthMm: number; areaM2: number }[] = [];
+      const zones: { label: string; depthMm: number; areaM2: number }[] = [];
       for (let z = 0; z < SEDIMENT_ZONES; z++) {
         const depthMm = round(20 + rand() * 80);
         const areaM2 = round(5 + rand() * 30);
-        zones.push({ depthMm, areaM2 });
+        zones.push({ label: `Bay ${z + 1}`, depthMm, areaM2 });
         zoneRows.push({ id: randomUUID(), orgId, inspectionId, label: `Bay ${z + 1}`, frameFrom: frameFrom + z * 4, frameTo: frameFrom + z * 4 + 4, depthMm, areaM2, volumeM3: round((depthMm / 1000) * areaM2, 3) });
       }
       if (n === INSPECTIONS - 1) sources.push({ tankId, tankCode: code, inspectionId, inspectedOn, findings: fs, anodes: { toRenewCount: toRenew }, sedimentZones: zones });

@@ -128,6 +128,18 @@ export async function sumDockingItems(scope: TDockingScope) {
   }));
 }
 
+/** How far the yard's work has got: the included items, and how many of them are marked done. */
+export async function countDoneItems(scope: TDockingScope) {
+  const [row] = await db()
+    .select({
+      included: sql<number>`count(*) filter (where ${dockingItems.included})::int`,
+      done: sql<number>`count(*) filter (where ${dockingItems.included} and ${dockingItems.doneAt} is not null)::int`,
+    })
+    .from(dockingItems)
+    .where(and(eq(dockingItems.orgId, scope.orgId), eq(dockingItems.dockingId, scope.dockingId)));
+  return { included: Number(row?.included ?? 0), done: Number(row?.done ?? 0) };
+}
+
 /** Each tank's latest countersigned inspection of the docking's vessel (tank_latest_inspections), by tank code. */
 export async function listLatestInspectionsOfDocking(scope: TDockingScope) {
   return db()
@@ -185,7 +197,7 @@ export async function listWorkSources(scope: TVesselScope, w: TWriter = db()): P
   const [fs, anodes, zones] = await Promise.all([
     w.select().from(findings).where(and(eq(findings.orgId, scope.orgId), inArray(findings.inspectionId, ids))),
     w.select().from(anodeRecords).where(and(eq(anodeRecords.orgId, scope.orgId), inArray(anodeRecords.inspectionId, ids))),
-    w.select().from(sedimentZones).where(and(eq(sedimentZones.orgId, scope.orgId), inArray(sedimentZones.inspectionId, ids))),
+    w.select({ inspectionId: sedimentZones.inspectionId, label: sedimentZones.label, depthMm: sedimentZones.depthMm, areaM2: sedimentZones.areaM2 }).from(sedimentZones).where(and(eq(sedimentZones.orgId, scope.orgId), inArray(sedimentZones.inspectionId, ids))),
   ]);
   return latest
     .sort((a, b) => a.tankCode.localeCompare(b.tankCode))

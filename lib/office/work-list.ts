@@ -60,7 +60,8 @@ export type TWorkSource = {
   inspectedOn: string;
   findings: readonly TWorkSourceFinding[];
   anodes: { toRenewCount: number } | null;
-  sedimentZones: readonly { depthMm: number; areaM2: number }[];
+  /** Each zone with what the surveyor called it ("Bottom between the floors, aft end"), to tell the yard where. */
+  sedimentZones: readonly { label: string; depthMm: number; areaM2: number }[];
 };
 
 export type TWorkItem = {
@@ -87,10 +88,20 @@ function describeFinding(f: TWorkSourceFinding): string {
 }
 
 /**
+ * Where the sediment is to be removed: the zones that hold any, by their
+ * labels, separated by semicolons (a label may hold a comma):
+ * "Sediment removal, 2 zones: Bottom between the floors, aft end; Stringer 2, forward".
+ */
+function describeSediment(zones: TWorkSource["sedimentZones"]): string {
+  const labels = zones.filter((z) => totalVolumeM3([z]) > 0).map((z) => z.label.trim() || "zone without a label");
+  return `Sediment removal, ${labels.length} zone${labels.length === 1 ? "" : "s"}: ${labels.join("; ")}`;
+}
+
+/**
  * The work items of the given inspections, one per tank (its latest
  * countersigned inspection): per open finding a steel item (kg) and a coating
  * item (m²) where it has them, per tank an anode item (pieces to renew) and a
- * sediment item (m³, all zones). Findings under monitoring or closed are left
+ * sediment item (m³, all zones, named by their labels). Findings under monitoring or closed are left
  * out; open findings without quantities come back as `unpriced`. Never
  * produces "other": that work is added by hand.
  */
@@ -116,10 +127,7 @@ export function gatherWorkItems(sources: readonly TWorkSource[]): { items: TWork
       items.push({ ...base, key: `${s.tankId}:anodes`, kind: "anodes", findingId: null, description: "Anodes to renew", unit: WORK_UNITS.anodes, quantity: s.anodes.toRenewCount });
     }
     const volume = totalVolumeM3(s.sedimentZones);
-    if (volume > 0) {
-      const zones = s.sedimentZones.length;
-      items.push({ ...base, key: `${s.tankId}:sediment`, kind: "sediment", findingId: null, description: `Sediment removal, ${zones} zone${zones === 1 ? "" : "s"}`, unit: WORK_UNITS.sediment, quantity: volume });
-    }
+    if (volume > 0) items.push({ ...base, key: `${s.tankId}:sediment`, kind: "sediment", findingId: null, description: describeSediment(s.sedimentZones), unit: WORK_UNITS.sediment, quantity: volume });
   }
   return { items, unpriced };
 }

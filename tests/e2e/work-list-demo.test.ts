@@ -9,7 +9,7 @@
 // - finding 1: coating breakdown, Fr. 196+2 = 198 to 196+5 = 201, inner bottom plating, coating touch-up 2.5 m²;
 // - finding 2: coating breakdown, Fr. 196+8 = 204 to 196+9 = 205, bottom shell plating, coating touch-up 1.2 m²;
 // - neither finding has a steel repair (both are coating touch-ups), so the demo asks for no steel;
-// - anodes: 1 to renew; sediment: one zone, 50 mm deep over 20 m².
+// - anodes: 1 to renew; sediment: one zone, "Bottom between the floors, aft end", 50 mm deep over 20 m².
 // The demo's other inspection (No. 3 DB WBT P) is ready to sign, not countersigned, so it is not gathered.
 import fs from "node:fs";
 import path from "node:path";
@@ -78,7 +78,8 @@ describe("the docking work list from the demo data in Chromium", () => {
         // demo seed: anodes toRenewCount 1 × 145.00 = 145.00
         ["No. 2 DB WBT P", "Anodes to renew", "1 pcs", "$145.00", "$145.00"],
         // demo seed: sediment 50 mm = 0.050 m × 20 m² = 1.0 m³ × 60.00 = 60.00
-        ["No. 2 DB WBT P", "Sediment removal, 1 zone", "1 m³", "$60.00", "$60.00"],
+        // demo seed: the zone's label, "Bottom between the floors, aft end" (db/seed/complete-inspection.ts)
+        ["No. 2 DB WBT P", "Sediment removal, 1 zone: Bottom between the floors, aft end", "1 m³", "$60.00", "$60.00"],
       ]);
 
       // Per-kind totals: kind, quantity, items, cost.
@@ -110,7 +111,7 @@ describe("the docking work list from the demo data in Chromium", () => {
         // 1 piece × 145 = 145.00
         "No. 2 DB WBT P,Anode renewal,Anodes to renew,yes,1,,1,pcs,145,USD,145.00,",
         // 50 mm × 20 m² = 1 m³ × 60 = 60.00
-        'No. 2 DB WBT P,Sediment removal,"Sediment removal, 1 zone",yes,1,,1,m³,60,USD,60.00,',
+        'No. 2 DB WBT P,Sediment removal,"Sediment removal, 1 zone: Bottom between the floors, aft end",yes,1,,1,m³,60,USD,60.00,',
         // no steel repair in the demo report: 0 kg, 0.00
         'Total,Steel renewal,"0 included, 0 excluded",,,,0,kg,,USD,0.00,',
         // 2.5 + 1.2 = 3.7 m² × 38 = 140.60

@@ -74,7 +74,8 @@ describe("the docking work list in Chromium", () => {
     expect(fileName).toMatch(/^work-list-.*-2027-04-12\.csv$/);
     const lines = text.split("\r\n");
     expect(lines[0]).toBe("Tank,Kind,Description,Included,Quantity gathered,Adjusted quantity,Quantity priced,Unit,Unit rate,Currency,Cost,Reason");
-    expect(lines).toContain("No. 1 WBT P,Sediment removal,\"Sediment removal, 1 zone\",yes,1,3,3,m³,95,USD,285.00,Yard survey found more mud");
+    // the sediment zone's label from fillInspection tells the yard where
+    expect(lines).toContain("No. 1 WBT P,Sediment removal,\"Sediment removal, 1 zone: Bottom between the floors, aft end\",yes,1,3,3,m³,95,USD,285.00,Yard survey found more mud");
     expect(lines).toContain("Total,Coating repair,\"2 included, 0 excluded\",,,,3.7,m²,,USD,131.35,");
     expect(lines).toContain("No. 1 WBT P,Other work (added by hand),Staging in No. 1 WBT P for the coating repair,yes,2,,2,days,1250.5,USD,2501.00,Added: Coating repair at Fr. 82–89 is out of reach");
     expect(lines).toContain('Total,Other work (added by hand),"1 included, 0 excluded",,,,,,,USD,2501.00,');

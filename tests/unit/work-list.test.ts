@@ -36,8 +36,9 @@ const tankA: TWorkSource = {
   ],
   anodes: { toRenewCount: 6 },
   sedimentZones: [
-    { depthMm: 100, areaM2: 450 },
-    { depthMm: 50, areaM2: 20 },
+    { label: "Bottom between the floors, aft end", depthMm: 100, areaM2: 450 },
+    { label: "Stringer 2, forward", depthMm: 50, areaM2: 20 },
+    { label: "Bilge well, aft", depthMm: 0, areaM2: 2 },
   ],
 };
 const tankB: TWorkSource = {
@@ -87,8 +88,14 @@ describe("gathering the work items", () => {
   it("describes each item so a yard can find it", () => {
     expect(items[0]?.description).toBe("Finding 1: Contact damage, Fr. 120–124, Side shell plating: steel renewal (insert plate)");
     expect(items[2]?.description).toBe("Finding 2: Local coating breakdown, Fr. 130, Web frame 3: coating repair (coating touch-up)");
-    expect(items[4]?.description).toBe("Sediment removal, 2 zones");
+    // the zones that hold sediment, by their labels (the empty bilge well, 0 mm, is not work for the yard)
+    expect(items[4]?.description).toBe("Sediment removal, 2 zones: Bottom between the floors, aft end; Stringer 2, forward");
     expect(items[0]).toMatchObject({ tankCode: "1P", inspectionId: "insp-a" });
+  });
+
+  it("names the one zone of a tank where the sediment is", () => {
+    const one = gatherWorkItems([{ ...tankB, sedimentZones: [{ label: "Bottom between the floors, aft end", depthMm: 50, areaM2: 20 }] }]).items;
+    expect(one.find((i) => i.kind === "sediment")?.description).toBe("Sediment removal, 1 zone: Bottom between the floors, aft end");
   });
 
   it("never gathers work of the kind added by hand", () => {
