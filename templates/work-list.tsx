@@ -1,6 +1,8 @@
 // The docking work list as a PDF: docking particulars and rates, one row per
-// item (tank, work, quantity, unit rate, cost; excluded items struck through
-// with their reason; work added by hand with its own rate and why it was
+// item (tank, work, quantity, unit rate, cost; each in its own cell, the tank
+// code wrapping within its column; an excluded item's work struck through,
+// its reason not, and "excluded" in place of its cost, so the Cost column adds
+// up to the totals; work added by hand with its own rate and why it was
 // added), totals per kind (hand-added work: no quantity, mixed units) and the
 // grand total. Every figure comes priced from lib/office/work-list.ts; nothing
 // is computed here.
@@ -18,10 +20,11 @@ const s = StyleSheet.create({
   meta: { color: "#475569", marginBottom: 2 },
   row: { flexDirection: "row", borderBottomWidth: 0.5, borderBottomColor: "#cbd5e1", paddingVertical: 2 },
   head: { flexDirection: "row", borderBottomWidth: 1, borderBottomColor: "#334155", paddingVertical: 2, fontWeight: 700 },
-  tank: { width: 62 },
-  work: { flex: 1, paddingRight: 4 },
-  num: { width: 70, textAlign: "right" },
+  tank: { width: 84, paddingRight: 10 },
+  work: { flex: 1, paddingRight: 10 },
+  num: { width: 68, textAlign: "right" },
   excluded: { color: "#64748b", textDecoration: "line-through" },
+  excludedCost: { width: 68, textAlign: "right", color: "#475569" },
   reason: { fontSize: 7.5, color: "#475569" },
   grand: { flexDirection: "row", paddingVertical: 3, fontWeight: 700, fontSize: 10 },
 });
@@ -49,13 +52,13 @@ export function WorkListDocument<T extends TWorkListPdfItem>({ list, head }: { l
           <View key={n} style={s.row} wrap={false}>
             <Text style={s.tank}>{i.tankCode ?? "—"}</Text>
             <View style={s.work}>
-              <Text style={i.included ? {} : s.excluded}>{i.description}{i.included ? "" : " (excluded)"}</Text>
+              <Text style={i.included ? {} : s.excluded}>{i.description}</Text>
               {i.kind === "other" ? <Text style={s.reason}>Added by hand{i.addedByName ? ` by ${i.addedByName}` : ""}: {i.addedReason ?? ""}</Text> : null}
               {i.adjustmentReason ? <Text style={s.reason}>Reason: {i.adjustmentReason}{i.adjustedQuantity !== null ? ` (gathered ${qty(i.quantity, i.unit)})` : ""}</Text> : null}
             </View>
             <Text style={s.num}>{qty(i.quantityPriced, i.unit)}</Text>
             <Text style={s.num}>{money(i.unitRate)}</Text>
-            <Text style={s.num}>{money(i.cost)}</Text>
+            {i.included ? <Text style={s.num}>{money(i.cost)}</Text> : <Text style={s.excludedCost}>excluded</Text>}
           </View>
         ))}
         <Text style={s.h2}>Totals ({list.currency})</Text>

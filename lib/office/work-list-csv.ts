@@ -4,7 +4,9 @@
 // apostrophe. Costs carry the currency's minor unit; quantities up to 3 decimals.
 // Work added by hand ("other") has its own unit rate on its row and its reason
 // for being added in the Reason column; its total row has no quantity or unit
-// (mixed units), only the counts and the cost.
+// (mixed units), only the counts and the cost. An excluded item's Cost cell is
+// empty (Included says "no"), so the Cost column of the items adds up to the
+// grand total, as a yard checks it.
 import { WORK_KIND_LABELS, WORK_KINDS, WORK_UNITS, type TPricedWorkList, type TWorkKind } from "./work-list";
 
 export const WORK_LIST_CSV_HEADER = ["Tank", "Kind", "Description", "Included", "Quantity gathered", "Adjusted quantity", "Quantity priced", "Unit", "Unit rate", "Currency", "Cost", "Reason"] as const;
@@ -51,7 +53,7 @@ export function workListCsv<T extends TCsvItem>(list: TPricedWorkList<T>, head: 
       i.unit,
       String(i.unitRate),
       list.currency,
-      money(i.cost),
+      i.included ? money(i.cost) : "",
       defuseFormula(reasonText(i)),
     ]);
   }

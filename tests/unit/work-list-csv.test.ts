@@ -34,11 +34,12 @@ describe("workListCsv", () => {
       { currency: "JPY", steelRatePerKg: 500, coatingRatePerM2: 4000.4, anodeRatePerPiece: 20000, sedimentRatePerM3: 9000 },
     );
     const lines = workListCsv(list, { vesselName: "Test Vessel", yard: "Yard", place: "Port", plannedOn: "2027-01-01" }).split("\r\n");
-    // coating 2 m² × 4000.4 = 8000.8 → 8001 yen (JPY has no minor unit)
+    // coating 2 m² × 4000.4 = 8000.8 → 8001 yen (JPY has no minor unit);
+    // the excluded anodes (3 × 20 000 = 60 000 yen) leave Cost empty: the items' Cost column sums to 8001, the grand total
     expect(lines).toEqual([
       "Tank,Kind,Description,Included,Quantity gathered,Adjusted quantity,Quantity priced,Unit,Unit rate,Currency,Cost,Reason",
       'No. 2 WBT S,Coating repair,"Finding 1: x, y",yes,2,,2,m²,4000.4,JPY,8001,',
-      "No. 2 WBT S,Anode renewal,Anodes to renew,no,3,,3,pcs,20000,JPY,60000,'=renewed already",
+      "No. 2 WBT S,Anode renewal,Anodes to renew,no,3,,3,pcs,20000,JPY,,'=renewed already",
       'Total,Steel renewal,"0 included, 0 excluded",,,,0,kg,,JPY,0,',
       'Total,Coating repair,"1 included, 0 excluded",,,,2,m²,,JPY,8001,',
       'Total,Anode renewal,"0 included, 1 excluded",,,,0,pcs,,JPY,0,',
@@ -67,5 +68,25 @@ describe("workListCsv", () => {
     // other: 1 701.00 + 600.00 = 2 301.00; grand total 105.00 + 2 301.00 = 2 406.00
     expect(lines).toContain('Total,Other work (added by hand),"2 included, 0 excluded",,,,,,,EUR,2301.00,');
     expect(lines.at(-2)).toBe('Grand total,,"Test Vessel, Yard, Port, planned 2027-01-01",,,,,,,EUR,2406.00,');
+  });
+
+  it("leaves an excluded item's Cost empty, so the items' Cost column adds up to the grand total", () => {
+    const list = priceWorkList(
+      [
+        { key: "s", kind: "steel" as const, quantity: 100, tankCode: "3P", description: "Finding 1: insert plate", unit: "kg" },
+        { key: "c", kind: "coating" as const, quantity: 2, tankCode: "3P", description: "Finding 2: touch-up", unit: "m²", included: false, adjustmentReason: "Crew touched it up at sea" },
+        { key: "o", kind: "other" as const, quantity: 1, unitRate: 300, tankCode: null, description: "Gas-freeing of 3P before entry", unit: "lump sum", addedReason: "Hot work in 3P" },
+      ],
+      { currency: "USD", steelRatePerKg: 4, coatingRatePerM2: 40, anodeRatePerPiece: 150, sedimentRatePerM3: 70 },
+    );
+    const rows = workListCsv(list, { vesselName: "Test Vessel", yard: "Yard", place: "Port", plannedOn: "2027-01-01" }).split("\r\n").slice(1, 4);
+    // steel 100 kg × 4.00 = 400.00; coating 2 m² × 40.00 = 80.00 but excluded: no cost; other 1 × 300.00 = 300.00
+    expect(rows).toEqual([
+      "3P,Steel renewal,Finding 1: insert plate,yes,100,,100,kg,4,USD,400.00,",
+      "3P,Coating repair,Finding 2: touch-up,no,2,,2,m²,40,USD,,Crew touched it up at sea",
+      ",Other work (added by hand),Gas-freeing of 3P before entry,yes,1,,1,lump sum,300,USD,300.00,Added: Hot work in 3P",
+    ]);
+    // 400.00 + 300.00 = 700.00, the grand total
+    expect(list.grandTotal).toBe(700);
   });
 });
