@@ -17,7 +17,8 @@ const UNITS = ["lump sum", "days", "hours", "m²", "m³", "pcs", "tanks"];
  * Adds work that no finding asks for (staging, gas-freeing, cleaning, a
  * surveyor's attendance, a lump sum) at its own rate. Checked in the browser
  * with the server's schema; the server decides (tank of the vessel, locked
- * docking). What was typed stays in the boxes until the item is added.
+ * docking), and its refusal puts each field's message beside the field. What
+ * was typed stays in the boxes until the item is added.
  */
 export function AddWorkItemForm<T>({
   dockingId,
@@ -59,6 +60,8 @@ export function AddWorkItemForm<T>({
         const found: Partial<Record<TField, string>> = {};
         for (const i of body.error?.issues ?? []) if (i.path in EMPTY) found[i.path as TField] ??= i.message;
         setErrors(found);
+        // Each field's own message is beside it; the notice says only what to do.
+        if (Object.keys(found).length) return setMessage("Check the marked fields; nothing was added.");
         return setMessage(body.error?.message ?? "The item could not be added; nothing was changed.");
       }
       setDraft(EMPTY);

@@ -8,7 +8,7 @@ import * as q from "@/db/queries/dockings";
 import type { TActor } from "@/lib/auth/actor";
 import { authorizeVessel } from "@/lib/auth/authorize";
 import { AppError, issuesFromZod } from "@/lib/errors";
-import { validateInput } from "@/lib/http/route";
+import { describeIssues } from "@/lib/office/docking-messages";
 import { workListCsv } from "@/lib/office/work-list-csv";
 import { emptyKindSums, gatherWorkItems, isGatheredKind, isWorkKind, priceKindSums, priceWorkList, WORK_KIND_LABELS, type TWorkSource } from "@/lib/office/work-list";
 import { workListQueryFromParams, ZDockingDecisions, ZDockingDoneInput, ZDockingInput, ZDockingOtherItemInput, ZDockingStatusInput, type TWorkListQuery } from "@/lib/schemas/docking";
@@ -34,6 +34,22 @@ async function authorizeDocking(actor: TActor, dockingId: string) {
   }
 }
 
+/** How many items a decision body names, to say which item a message is about. */
+const itemCountOf = (body: unknown) => {
+  const items = (body as { items?: unknown } | null)?.items;
+  return Array.isArray(items) ? items.length : 1;
+};
+
+/** Validates a body against its schema; a refusal (400) names each field in words with its own message. */
+function validateDockingInput<S extends z.ZodType>(schema: S, body: unknown): z.infer<S> {
+  const parsed = schema.safeParse(body);
+  if (!parsed.success) {
+    const issues = issuesFromZod(parsed.error.issues);
+    throw new AppError("bad_request", describeIssues(issues, itemCountOf(body)), issues);
+  }
+  return parsed.data;
+}
+
 const gather = (sources: TWorkSource[]) => gatherWorkItems(sources).items;
 
 const lockedError = (status: string) =>
@@ -46,7 +62,7 @@ export async function listDockingsAs(actor: TActor, vesselId: string) {
 
 export async function createDockingAs(actor: TActor, vesselId: string, body: unknown) {
   const { orgId } = await authorizeVessel({ actor, vesselId, allow: DOCKING_PLANNERS });
-  const input = validateInput(ZDockingInput, body);
+  const input = validateDockingInput(ZDockingInput, body);
   return q.createDocking({ orgId, vesselId, actorUserId: actor.userId, input, gather });
 }
 
@@ -112,15 +128,21 @@ export async function getDockingAs(actor: TActor, dockingId: string, params: TVi
   };
 }
 
+/** While the docking is in progress: how many of its included items are done (over the whole list, not one page). */
+export async function readDockingProgressAs(actor: TActor, dockingId: string) {
+  const { orgId } = await authorizeDocking(actor, dockingId);
+  return q.countDoneItems({ orgId, dockingId });
+}
+
 /** Include, exclude or adjust items; every exclusion and adjustment needs a reason, and each change is audit-logged. */
 export async function decideDockingItemsAs(actor: TActor, dockingId: string, body: unknown, params: TViewParams = FIRST_PAGE) {
   const { orgId } = await authorizeDocking(actor, dockingId);
   const view = viewOf(params);
-  const input = validateInput(ZDockingDecisions, body);
+  const input = validateDockingInput(ZDockingDecisions, body);
   const issues = input.items.flatMap((d, n) =>
     !d.included && !d.adjustmentReason ? [{ path: `items.${n}.adjustmentReason`, message: "is required: say why the item is excluded" }] : [],
   );
-  if (issues.length) throw new AppError("bad_request", `Check ${issues.map((i) => i.path).join(", ")}: ${issues[0]!.message}`, issues);
+  if (issues.length) throw new AppError("bad_request", describeIssues(issues, input.items.length), issues);
   const decisions = input.items.map((d) => ({ id: d.id, included: d.included, adjustedQuantity: d.adjustedQuantity ?? null, adjustmentReason: d.adjustmentReason ?? null }));
   const result = await q.decideItems({ orgId, dockingId, actorUserId: actor.userId, decisions });
   if (!result) throw new AppError("not_found", "No such docking.");
@@ -137,7 +159,7 @@ export async function decideDockingItemsAs(actor: TActor, dockingId: string, bod
 export async function addDockingItemAs(actor: TActor, dockingId: string, body: unknown, params: TViewParams = FIRST_PAGE) {
   const { orgId } = await authorizeDocking(actor, dockingId);
   const view = viewOf(params);
-  const input = validateInput(ZDockingOtherItemInput, body);
+  const input = validateDockingInput(ZDockingOtherItemInput, body);
   const result = await q.addOtherItem({ orgId, dockingId, actorUserId: actor.userId, input });
   if (!result) throw new AppError("not_found", "No such docking.");
   if (result.locked) throw lockedError(result.locked);
@@ -191,7 +213,7 @@ export async function workListCsvAs(actor: TActor, dockingId: string) {
 export async function setDockingStatusAs(actor: TActor, dockingId: string, body: unknown, params: TViewParams = FIRST_PAGE) {
   const { orgId } = await authorizeDocking(actor, dockingId);
   const view = viewOf(params);
-  const { status } = validateInput(ZDockingStatusInput, body);
+  const { status } = validateDockingInput(ZDockingStatusInput, body);
   const result = await q.setDockingStatus({ orgId, dockingId, actorUserId: actor.userId, to: status });
   if (!result) throw new AppError("not_found", "No such docking.");
   if (result.refused) {
@@ -205,7 +227,7 @@ export async function setDockingStatusAs(actor: TActor, dockingId: string, body:
 export async function markDockingItemsDoneAs(actor: TActor, dockingId: string, body: unknown, params: TViewParams = FIRST_PAGE) {
   const { orgId } = await authorizeDocking(actor, dockingId);
   const view = viewOf(params);
-  const input = validateInput(ZDockingDoneInput, body);
+  const input = validateDockingInput(ZDockingDoneInput, body);
   const result = await q.markItemsDone({ orgId, dockingId, actorUserId: actor.userId, itemIds: input.itemIds, done: input.done });
   if (!result) throw new AppError("not_found", "No such docking.");
   if (result.refused) {

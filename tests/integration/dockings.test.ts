@@ -9,6 +9,7 @@ import { fillInspection } from "@/db/seed/complete-inspection";
 import { repairQuantities } from "@/lib/inspection/quantities";
 import { signIn, type TClient } from "../fixtures/http";
 import { pdfText } from "../fixtures/pdf";
+import { pdfTextRuns } from "../fixtures/pdf-text-runs";
 import { buildScenario, PASSWORD, testDb, type TScenario } from "../fixtures/scenario";
 
 let s: TScenario;
@@ -159,14 +160,44 @@ describe("deciding on items", () => {
 
   it("refuses an exclusion or an adjustment without a reason, and changes nothing", async () => {
     const coating = await itemOf("coating", 1.2);
-    for (const decision of [{ included: false }, { included: true, adjustedQuantity: 3 }]) {
+    const refusals: [object, string][] = [
+      [{ included: false }, "Reason is required: say why the item is excluded."],
+      [{ included: true, adjustedQuantity: 3 }, "Reason is required: say why the quantity was changed."],
+    ];
+    for (const [decision, message] of refusals) {
       const res = await superintendent.request(`/api/v1/dockings/${dockingId}/items`, { method: "PUT", json: { items: [{ id: coating.id, ...decision }] } });
       expect(res.status).toBe(400);
-      const e = (await res.json()) as { error: { issues: { path: string }[] } };
+      const e = (await res.json()) as { error: { message: string; issues: { path: string }[] } };
       expect(e.error.issues.map((i) => i.path)).toEqual(["items.0.adjustmentReason"]);
+      expect(e.error.message).toBe(message);
     }
     expect(await testDb().$count(auditLog, and(eq(auditLog.orgId, s.org.id), eq(auditLog.action, "docking_item.decide")))).toBe(0);
     expect((await itemOf("coating", 1.2)).included).toBe(true);
+  });
+
+  it("names each refused field in words with its own message, not the body's paths", async () => {
+    const coating = await itemOf("coating", 1.2);
+    const put = await superintendent.request(`/api/v1/dockings/${dockingId}/items`, { method: "PUT", json: { items: [{ id: coating.id, included: true, adjustedQuantity: -2 }] } });
+    expect(put.status).toBe(400);
+    const decided = (await put.json()) as { error: { message: string; issues: { path: string; message: string }[] } };
+    expect(decided.error.message).toBe("Adjusted quantity cannot be negative; Reason is required: say why the quantity was changed.");
+    // The paths stay in the issues, for a form to put each message beside its field.
+    expect(decided.error.issues).toEqual([
+      { path: "items.0.adjustedQuantity", message: "cannot be negative" },
+      { path: "items.0.adjustmentReason", message: "is required: say why the quantity was changed" },
+    ]);
+    // Two items in one body: each message says which item.
+    const sediment = await itemOf("sediment", 1);
+    const two = await superintendent.request(`/api/v1/dockings/${dockingId}/items`, { method: "PUT", json: { items: [{ id: sediment.id, included: true }, { id: coating.id, included: false }] } });
+    expect(((await two.json()) as { error: { message: string } }).error.message).toBe("Item 2, reason is required: say why the item is excluded.");
+    const add = await superintendent.request(`/api/v1/dockings/${dockingId}/items`, { method: "POST", json: { description: "Staging", quantity: 2, unit: "days", unitRate: -5, reason: "ab" } });
+    expect(add.status).toBe(400);
+    expect(((await add.json()) as { error: { message: string } }).error.message).toBe(
+      "Description is too short for a yard to price: say what is to be done, and where, in at least three words; Unit rate cannot be negative; Reason: say why the item is added, in a few words.",
+    );
+    const plan = await superintendent.request(`/api/v1/vessels/${s.ownVessel.id}/dockings`, { method: "POST", json: { ...DOCKING, plannedOn: "12/04/2027", steelRatePerKg: -1 } });
+    expect(((await plan.json()) as { error: { message: string } }).error.message).toBe("Planned date must be a date like 2026-03-14; Steel renewal rate per kg cannot be negative.");
+    expect(await testDb().$count(auditLog, and(eq(auditLog.orgId, s.org.id), eq(auditLog.action, "docking_item.decide")))).toBe(0);
   });
 
   it("excludes and adjusts with reasons, audit-logs each change, and prices again", async () => {
@@ -213,10 +244,13 @@ describe("deciding on items", () => {
       "Tank,Kind,Description,Included,Quantity gathered,Adjusted quantity,Quantity priced,Unit,Unit rate,Currency,Cost,Reason",
       `${t},Steel renewal,"Finding 3: Pitting, Fr. 90–91, Bottom shell plating: steel renewal (insert plate)",yes,117.75,,117.75,kg,4.2,USD,494.55,`,
       `${t},Coating repair,"Finding 1: Local coating breakdown, Fr. 82–85, Inner bottom plating: coating repair (coating touch-up)",yes,2.5,,2.5,m²,35.5,USD,88.75,`,
-      `${t},Coating repair,"Finding 2: Local coating breakdown, Fr. 88–89, Bottom shell plating: coating repair (coating touch-up)",no,1.2,,1.2,m²,35.5,USD,42.60,Touched up by the crew at sea`,
+      // excluded: no Cost, so the items' Cost column adds up to the grand total
+      // (494.55 + 88.75 + 53.25 + 180.00 + 285.00 = 1101.55, worked at the top of this file and in the test above)
+      `${t},Coating repair,"Finding 2: Local coating breakdown, Fr. 88–89, Bottom shell plating: coating repair (coating touch-up)",no,1.2,,1.2,m²,35.5,USD,,Touched up by the crew at sea`,
       `${t},Coating repair,"Finding 3: Pitting, Fr. 90–91, Bottom shell plating: coating repair (insert plate)",yes,1.5,,1.5,m²,35.5,USD,53.25,`,
       `${t},Anode renewal,Anodes to renew,yes,1,,1,pcs,180,USD,180.00,`,
-      `${t},Sediment removal,"Sediment removal, 1 zone",yes,1,3,3,m³,95,USD,285.00,"Yard survey found more mud, ""about 3 m³"""`,
+      // the zone's label from fillInspection
+      `${t},Sediment removal,"Sediment removal, 1 zone: Bottom between the floors, aft end",yes,1,3,3,m³,95,USD,285.00,"Yard survey found more mud, ""about 3 m³"""`,
       `Total,Steel renewal,"1 included, 0 excluded",,,,117.75,kg,,USD,494.55,`,
       `Total,Coating repair,"2 included, 1 excluded",,,,4,m²,,USD,142.00,`,
       `Total,Anode renewal,"1 included, 0 excluded",,,,1,pcs,,USD,180.00,`,
@@ -236,6 +270,21 @@ describe("deciding on items", () => {
     expect(text).toContain("Reason: Touched up by the crew at sea");
     expect(text).toMatch(/Coating repair: 2 included, 1 excluded 4 m² 142\.00 USD/);
     expect(text).toMatch(/Grand total 1101\.55 USD/);
+    // The excluded coating (1.2 m² × 35.50 = 42.60) shows "excluded" in place of its cost.
+    expect(text).not.toContain("42.60 USD");
+    // The tank code and the work are drawn apart on every item row: the tank's own run of text
+    // ends left of the work's first line, on the same baseline, with a gap.
+    const runs = await pdfTextRuns(new Uint8Array(await (await superintendent.request(`/api/v1/dockings/${dockingId}/work-list.pdf`)).arrayBuffer()));
+    const works = runs.filter((r) => /^(Finding \d+:|Anodes to renew|Sediment removal,)/.test(r.str));
+    expect(works).toHaveLength(6); // 6 items, worked at the top of this file
+    for (const work of works) {
+      const tank = runs.find((r) => r.page === work.page && Math.abs(r.y - work.y) < 0.5 && r.str.trim() === "No. 1 WBT P");
+      expect(tank, work.str).toBeDefined();
+      expect(tank!.x + tank!.width + 4, work.str).toBeLessThan(work.x);
+    }
+    expect(runs.some((r) => /WBT P\S*Finding|WBT P(Anodes|Sediment)/.test(r.str))).toBe(false);
+    const excluded = works.find((r) => r.str.startsWith("Finding 2:"))!;
+    expect(runs.filter((r) => Math.abs(r.y - excluded.y) < 0.5).map((r) => r.str.trim()).slice(-3)).toEqual(["1.2 m²", "35.50 USD", "excluded"]);
     expect((await officer.request(`/api/v1/dockings/${dockingId}/work-list.pdf`)).status).toBe(403);
     expect((await otherAdmin.request(`/api/v1/dockings/${dockingId}/work-list.pdf`)).status).toBe(404);
   }, 60_000);
