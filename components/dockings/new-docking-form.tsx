@@ -13,7 +13,8 @@ type TErrorBody = { error?: { message?: string; issues?: { path: string; message
 const FIELDS = [
   { name: "yard", label: "Yard", hint: "The repair yard's name" },
   { name: "place", label: "Place", hint: "Port or berth" },
-  { name: "plannedOn", label: "Planned date", hint: "2027-04-12", type: "date" },
+  // Written as the product writes dates everywhere (2027-04-12), not in the browser's locale.
+  { name: "plannedOn", label: "Planned date", hint: "YYYY-MM-DD, e.g. 2027-04-12", placeholder: "YYYY-MM-DD" },
   { name: "currency", label: "Currency", hint: "ISO 4217 code: USD, EUR, SGD …" },
   { name: "steelRatePerKg", label: "Steel renewal, per kg", inputMode: "decimal" },
   { name: "coatingRatePerM2", label: "Coating repair, per m²", inputMode: "decimal" },
@@ -86,7 +87,8 @@ export function NewDockingForm({ vesselId, ratesFrom }: { vesselId: string; rate
             label={f.label}
             name={f.name}
             hint={"hint" in f ? f.hint : undefined}
-            type={"type" in f ? f.type : "text"}
+            type="text"
+            placeholder={"placeholder" in f ? f.placeholder : undefined}
             inputMode={"inputMode" in f ? f.inputMode : undefined}
             value={draft[f.name]}
             error={errors[f.name]}

@@ -8,7 +8,7 @@ import { Pager } from "@/components/ui/pager";
 import { pageActor, pageAuthorize } from "@/lib/auth/page";
 import { formatMoney } from "@/lib/format";
 import { workListQueryFromParams } from "@/lib/schemas/docking";
-import { getDockingAs } from "@/lib/services/dockings";
+import { getDockingAs, readDockingProgressAs } from "@/lib/services/dockings";
 import { readVesselTanks } from "@/lib/services/tanks";
 import { DOCKING_STATUS_LABELS } from "@/lib/vocabulary";
 
@@ -35,6 +35,7 @@ export default async function WorkListPage({ params, searchParams }: { params: P
   const viewQuery = hrefFor(paging.page).split("?")[1] ?? "";
   const rate = (n: number) => formatMoney(n, docking.currency, { rate: true });
   const locked = docking.status === "completed" || docking.status === "cancelled";
+  const progress = docking.status === "in_progress" ? await readDockingProgressAs(actor, docking.id) : null;
   return (
     <>
       <PageHeader
@@ -72,6 +73,7 @@ export default async function WorkListPage({ params, searchParams }: { params: P
           itemsNote={paging.tank ? `Items of ${sources.find((s) => s.tankId === paging.tank)?.tankCode ?? "one tank"}; the totals below cover the whole list (${workList.counts.included + workList.counts.excluded} items).` : null}
           locked={locked}
           inProgress={docking.status === "in_progress"}
+          progress={progress}
           tanks={tanks.map((t) => ({ id: t.id, code: t.code }))}
           initial={{
             currency: workList.currency,
@@ -80,7 +82,7 @@ export default async function WorkListPage({ params, searchParams }: { params: P
             totals: workList.totals,
             items: workList.items.map((i) => ({
               id: i.id, tankCode: i.tankCode, kind: i.kind, description: i.description, unit: i.unit, quantity: i.quantity, adjustedQuantity: i.adjustedQuantity,
-              adjustmentReason: i.adjustmentReason, included: i.included, quantityPriced: i.quantityPriced, unitRate: i.unitRate, cost: i.cost, done: i.doneAt !== null,
+              adjustmentReason: i.adjustmentReason, included: i.included, quantityPriced: i.quantityPriced, unitRate: i.unitRate, cost: i.cost, doneAt: i.doneAt === null ? null : new Date(i.doneAt).toISOString(),
               addedReason: i.addedReason, addedByName: i.addedByName,
             })),
           }}
