@@ -5,6 +5,12 @@ type TFieldProps = { label: string; name: string; error?: string; hint?: ReactNo
 const inputClass =
   "mt-1 block w-full rounded-md border border-slate-300 bg-white px-3 py-2 text-base shadow-sm aria-[invalid=true]:border-red-600";
 
+/** "Currency must be …", "Reason: say why …": a message in lower case is read after the field's label. */
+function withLabel(label: string, error: string): string {
+  if (!/^[a-z]/.test(error)) return error;
+  return /^(is|are|must|cannot|can|should|has|have|needs|was|were|may|does)\b/.test(error) ? `${label} ${error}` : `${label}: ${error}`;
+}
+
 function FieldShell({ label, name, error, hint, children }: TFieldProps & { children: ReactNode }) {
   return (
     <div>
@@ -15,7 +21,7 @@ function FieldShell({ label, name, error, hint, children }: TFieldProps & { chil
       {hint && !error ? <p id={`${name}-hint`} className="mt-1 text-xs text-slate-600">{hint}</p> : null}
       {error ? (
         <p id={`${name}-error`} role="alert" className="mt-1 text-sm text-red-700">
-          {/^[a-z]/.test(error) ? `${label} ${error}` : error}
+          {withLabel(label, error)}
         </p>
       ) : null}
     </div>
