@@ -3,14 +3,19 @@ import type { TFleetCounts } from "@/db/queries/fleet";
 import type { TFleetRatingFilter } from "@/lib/schemas/fleet";
 import { RatingSwatch } from "./rating-mark";
 
-type TCount = { label: string; value: number; href?: string; swatch?: "GOOD" | "FAIR" | "POOR" | "never" };
+/** note: what else the count includes, part of the label. */
+type TCount = { label: string; note?: string; value: number; href?: string; swatch?: "GOOD" | "FAIR" | "POOR" | "never" };
 
-/** The counts over every tank in view (the vessel filter narrows them, the other filters do not). */
+/**
+ * The counts over every tank in view (the vessel filter narrows them, the other
+ * filters do not). A count's link lists exactly the tanks it counts.
+ */
 export function FleetCounts({ counts, hrefFor, dueSoonDays }: { counts: TFleetCounts; hrefFor: (f: { rating?: TFleetRatingFilter; dueWithin?: number }) => string; dueSoonDays: number }) {
   const items: TCount[] = [
     { label: "Tanks", value: counts.tanks, href: hrefFor({}) },
     { label: "Overdue", value: counts.overdue },
-    { label: `Due within ${dueSoonDays} days`, value: counts.dueSoon, href: hrefFor({ dueWithin: dueSoonDays }) },
+    // The same definition as the dueWithin filter its link opens (db/queries/fleet.ts dueWithinWhere).
+    { label: `Due within ${dueSoonDays} days`, note: "overdue, never inspected and no interval set included", value: counts.dueSoon, href: hrefFor({ dueWithin: dueSoonDays }) },
     { label: "POOR", value: counts.poor, href: hrefFor({ rating: "POOR" }), swatch: "POOR" },
     { label: "FAIR", value: counts.fair, href: hrefFor({ rating: "FAIR" }), swatch: "FAIR" },
     { label: "GOOD", value: counts.good, href: hrefFor({ rating: "GOOD" }), swatch: "GOOD" },
@@ -18,23 +23,29 @@ export function FleetCounts({ counts, hrefFor, dueSoonDays }: { counts: TFleetCo
   ];
   return (
     <dl className="grid grid-cols-2 gap-2 sm:grid-cols-4 lg:grid-cols-7" aria-label="Counts">
-      {items.map((c) => (
-        <div key={c.label} className="rounded-lg border border-slate-200 bg-white px-3 py-2">
-          <dt className="flex items-center gap-1.5 text-xs font-semibold uppercase tracking-wide text-slate-600">
-            {c.swatch ? <RatingSwatch kind={c.swatch} /> : null}
-            {c.label}
-          </dt>
-          <dd className="text-2xl font-bold text-hull-900">
-            {c.href ? (
-              <Link href={c.href} className="hover:underline" aria-label={`${c.label}: ${c.value}, show them`}>
-                {c.value}
-              </Link>
-            ) : (
-              c.value
-            )}
-          </dd>
-        </div>
-      ))}
+      {items.map((c) => {
+        const label = c.note ? `${c.label} (${c.note})` : c.label;
+        return (
+          <div key={c.label} className="flex flex-col justify-between rounded-lg border border-slate-200 bg-white px-3 py-2">
+            <dt className="text-xs text-slate-600">
+              <span className="flex items-center gap-1.5 font-semibold uppercase tracking-wide">
+                {c.swatch ? <RatingSwatch kind={c.swatch} /> : null}
+                {c.label}
+              </span>
+              {c.note ? <span className="block leading-tight">({c.note})</span> : null}
+            </dt>
+            <dd className="text-2xl font-bold text-hull-900">
+              {c.href ? (
+                <Link href={c.href} className="hover:underline" aria-label={`${label}: ${c.value}, show them`}>
+                  {c.value}
+                </Link>
+              ) : (
+                c.value
+              )}
+            </dd>
+          </div>
+        );
+      })}
     </dl>
   );
 }

@@ -32,10 +32,13 @@ export function FleetTankTable({ tanks }: { tanks: TFleetTank[] }) {
         <tr key={t.tankId} data-tank={t.code}>
           <Cell>{t.vesselName}</Cell>
           <Cell>
-            <Link href={`/vessels/${t.vesselId}/tanks/${t.tankId}`} className="font-semibold text-hull-700 hover:underline">
+            <Link href={`/vessels/${t.vesselId}/tanks/${t.tankId}/history`} className="font-semibold text-hull-700 hover:underline" aria-label={`${t.code}: history`} data-link="history">
               {t.code}
             </Link>
             <span className="block text-xs text-slate-600">{t.name}</span>
+            <Link href={`/vessels/${t.vesselId}/tanks/${t.tankId}`} className="text-xs text-hull-700 underline hover:no-underline" aria-label={`${t.code}: structure map`} data-link="tank">
+              Structure map
+            </Link>
           </Cell>
           <Cell>
             <RatingMark kind={t.rating ? t.rating.rating : t.lastInspection ? "unrated" : "never"} />

@@ -14,7 +14,7 @@ import { db } from "@/db";
 import { coatingAreas } from "@/db/schema";
 import type { TTwentyPercentRule } from "@/lib/calc/coating";
 import type { TCoatingSystem } from "@/lib/office/due-dates";
-import type { TFleetRatingFilter } from "@/lib/schemas/fleet";
+import type { TFleetRatingFilter, TFleetSort } from "@/lib/schemas/fleet";
 import type { TCoatingArea, TTankKind, TTankSide, TVesselType } from "@/lib/vocabulary";
 
 export type TFleetScope = {
@@ -27,8 +27,26 @@ export type TFleetScope = {
 };
 export type TFleetFilters = { rating?: TFleetRatingFilter; dueWithin?: number };
 
-/** Days ahead that the "due within 30 days" count looks. */
+/** Days ahead that the "due within 30 days" count looks; its card links to `dueWithin=DUE_SOON_DAYS`. */
 export const DUE_SOON_DAYS = 30;
+
+/**
+ * "Due within N days", the one definition the filter and the count share: due
+ * by today + N, so an overdue tank is included, and a tank never inspected or
+ * with no interval set (no due date) is due now (as isDueWithin in
+ * lib/office/due-dates.ts).
+ */
+function dueWithinWhere(days: number, today: string): SQL {
+  return sql`(due_on is null or due_on <= ${today}::date + ${days}::int)`;
+}
+
+/** Tie-breaks shared by both orders: vessel, the structure map's order, code, id. */
+const VESSEL_ORDER = sql`vessel_name, vessel_id, sort_order, code, tank_id`;
+const ORDER_BY: Record<TFleetSort, SQL> = {
+  vessel: VESSEL_ORDER,
+  // Most urgent first: no due date (never inspected, no interval) is due now, then the oldest due date.
+  due: sql`due_on asc nulls first, ${VESSEL_ORDER}`,
+};
 
 /** `with … dated`: one row per tank in scope. Every table is read with the company in its where. */
 function datedTanks(scope: TFleetScope): SQL {
@@ -69,8 +87,7 @@ function filterWhere(filters: TFleetFilters, today: string): SQL {
   if (filters.rating === "never") parts.push(sql`inspection_id is null`);
   else if (filters.rating === "unrated") parts.push(sql`inspection_id is not null and rating_rank is null`);
   else if (filters.rating) parts.push(sql`rating_rank = ${rank[filters.rating]}`);
-  // As isDueWithin: a tank never inspected (or with no interval set) is always due.
-  if (filters.dueWithin !== undefined) parts.push(sql`(due_on is null or due_on <= ${today}::date + ${filters.dueWithin}::int)`);
+  if (filters.dueWithin !== undefined) parts.push(dueWithinWhere(filters.dueWithin, today));
   return sql.join(parts, sql` and `);
 }
 
@@ -93,8 +110,8 @@ export type TFleetTankRow = {
   dueOn: string | null;
 };
 
-/** One page of tanks, ordered by vessel, then the structure map's order, then code. */
-export async function listFleetTanks({ scope, filters, limit, offset }: { scope: TFleetScope; filters: TFleetFilters; limit: number; offset: number }): Promise<TFleetTankRow[]> {
+/** One page of tanks, ordered by vessel (then the structure map's order, then code) or most urgent first. */
+export async function listFleetTanks({ scope, filters, sort = "vessel", limit, offset }: { scope: TFleetScope; filters: TFleetFilters; sort?: TFleetSort; limit: number; offset: number }): Promise<TFleetTankRow[]> {
   const res = await db().execute<Record<string, unknown>>(sql`
     ${datedTanks(scope)}
     select tank_id, vessel_id, vessel_name, vessel_type, code, tank_name, kind, side, coating_system,
@@ -102,7 +119,7 @@ export async function listFleetTanks({ scope, filters, limit, offset }: { scope:
            default_months, below_good_months, rating_rank, to_char(due_on, 'YYYY-MM-DD') as due_on
     from dated
     where ${filterWhere(filters, scope.today)}
-    order by vessel_name, vessel_id, sort_order, code, tank_id
+    order by ${ORDER_BY[sort]}
     limit ${limit} offset ${offset}`);
   return res.rows.map((r) => ({
     tankId: String(r.tank_id),
@@ -123,6 +140,7 @@ export async function listFleetTanks({ scope, filters, limit, offset }: { scope:
   }));
 }
 
+/** dueSoon: the tanks `dueWithin: DUE_SOON_DAYS` lists (overdue, never inspected and no interval included). */
 export type TFleetCounts = { tanks: number; overdue: number; dueSoon: number; poor: number; fair: number; good: number; unrated: number; neverInspected: number; matching: number };
 
 /** The counts at the top, over every tank in scope (not narrowed by the filters), and how many tanks the filters match. */
@@ -132,7 +150,7 @@ export async function countFleetTanks({ scope, filters }: { scope: TFleetScope; 
     ${datedTanks(scope)}
     select count(*)::int as tanks,
            count(*) filter (where due_on < ${today})::int as overdue,
-           count(*) filter (where due_on >= ${today} and due_on <= ${today} + ${DUE_SOON_DAYS}::int)::int as due_soon,
+           count(*) filter (where ${dueWithinWhere(DUE_SOON_DAYS, scope.today)})::int as due_soon,
            count(*) filter (where rating_rank = 2)::int as poor,
            count(*) filter (where rating_rank = 1)::int as fair,
            count(*) filter (where rating_rank = 0)::int as good,

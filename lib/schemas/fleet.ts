@@ -13,6 +13,13 @@ export const FLEET_RATING_FILTER_LABELS: Record<TFleetRatingFilter, string> = {
   unrated: "Inspected, coating not rated",
   never: "Never inspected",
 };
+/** vessel: by vessel, then the structure map's order; due: the most urgent first (never inspected or no interval, then the oldest due date). */
+export const FLEET_SORTS = ["vessel", "due"] as const;
+export type TFleetSort = (typeof FLEET_SORTS)[number];
+export const FLEET_SORT_LABELS: Record<TFleetSort, string> = {
+  vessel: "Vessel and tank",
+  due: "Most urgent first",
+};
 export const FLEET_PAGE_SIZE_MAX = 200;
 export const FLEET_DUE_WITHIN_MAX = 3650;
 
@@ -20,6 +27,7 @@ export const ZFleetQuery = z.object({
   vessel: z.preprocess(blankParam, z.uuid({ error: "vessel must be the id of a vessel" }).optional()),
   rating: z.preprocess(blankParam, z.enum(FLEET_RATING_FILTERS, { error: `rating must be one of ${FLEET_RATING_FILTERS.join(", ")}` }).optional()),
   dueWithin: z.preprocess(blankParam, wholeParam("dueWithin (days)", 0, FLEET_DUE_WITHIN_MAX).optional()),
+  sort: z.preprocess(blankParam, z.enum(FLEET_SORTS, { error: `sort must be one of ${FLEET_SORTS.join(", ")}` }).default("vessel")),
   page: z.preprocess(blankParam, wholeParam("page", 1, 100_000).default(1)),
   pageSize: z.preprocess(blankParam, wholeParam("pageSize", 1, FLEET_PAGE_SIZE_MAX).default(50)),
 });
@@ -27,5 +35,5 @@ export type TFleetQuery = z.infer<typeof ZFleetQuery>;
 
 export function fleetQueryFromParams(params: Parameters<typeof searchParamReader>[0]) {
   const get = searchParamReader(params);
-  return ZFleetQuery.safeParse({ vessel: get("vessel"), rating: get("rating"), dueWithin: get("dueWithin"), page: get("page"), pageSize: get("pageSize") });
+  return ZFleetQuery.safeParse({ vessel: get("vessel"), rating: get("rating"), dueWithin: get("dueWithin"), sort: get("sort"), page: get("page"), pageSize: get("pageSize") });
 }

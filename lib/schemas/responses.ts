@@ -11,7 +11,7 @@ import {
   TANK_SIDES,
   VESSEL_TYPES,
 } from "@/lib/vocabulary";
-import { FLEET_RATING_FILTERS } from "./fleet";
+import { FLEET_RATING_FILTERS, FLEET_SORTS } from "./fleet";
 
 // What the public API answers: the JSON bodies of its main reads, as zod schemas.
 // lib/http/openapi.ts turns them into the response schemas of /api/v1/openapi.json,
@@ -207,13 +207,16 @@ export const ZFleetOverview = z.strictObject({
     vessel: ZId.optional(),
     rating: z.enum(FLEET_RATING_FILTERS).optional(),
     dueWithin: z.number().int().min(0).optional(),
+    sort: z.enum(FLEET_SORTS),
     page: z.number().int().min(1),
     pageSize: z.number().int().min(1),
   }).describe("The filters and page as read."),
   vessels: z.array(z.strictObject({ id: ZId, name: z.string() })).describe("The vessels you may filter by."),
   counts: z
     .strictObject({ tanks: ZCount, overdue: ZCount, dueSoon: ZCount, poor: ZCount, fair: ZCount, good: ZCount, unrated: ZCount, neverInspected: ZCount, matching: ZCount })
-    .describe("Over every tank in scope, not narrowed by the filters; `matching` is how many the filters match."),
+    .describe(
+      "Over every tank in scope, not narrowed by the filters; `matching` is how many the filters match. `dueSoon` counts the tanks that `dueWithin=30` lists: due by today + 30 days, overdue, never inspected, or with no interval set.",
+    ),
   paging: z.strictObject({ page: z.number().int().min(1), pageSize: z.number().int().min(1), matching: ZCount, totalPages: z.number().int().min(1) }),
   tanks: z.array(ZFleetTank).describe("One page of tanks."),
 });

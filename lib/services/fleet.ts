@@ -109,7 +109,7 @@ export async function getFleetOverviewAs(actor: TActor, query: TFleetQuery, toda
   const offset = (query.page - 1) * query.pageSize;
   const [counts, rows, vessels] = await Promise.all([
     countFleetTanks({ scope, filters }),
-    listFleetTanks({ scope, filters, limit: query.pageSize, offset }),
+    listFleetTanks({ scope, filters, sort: query.sort, limit: query.pageSize, offset }),
     // The vessels the actor may choose between in the filter.
     office ? listVessels({ orgId }) : listVessels({ orgId, vesselIds: [...visibleVesselScope(actor.memberships).get(orgId) ?? vesselIds ?? []] }),
   ]);

@@ -54,8 +54,37 @@ describe("fleet overview in Chromium", () => {
     await page.waitForURL(/rating=POOR/);
     await expect(page.locator("tr[data-tank]").count()).resolves.toBe(1);
 
+    // Most urgent first (company: 12 months, 6 below GOOD): the two No. 1 WBT P (own and sibling vessel, never
+    // inspected: due now), No. 2 WBT S (12 %: FAIR, 2025-09-15 + 6 months = 2026-03-15), No. 3 WBT P (27 %: POOR,
+    // 2026-02-01 + 6 = 2026-08-01), No. 2 WBT P (1 %: GOOD, 2026-06-30 + 12 = 2027-06-30).
+    await page.getByLabel("Rating").selectOption("");
+    await page.locator('select[name="sort"]').selectOption("due");
+    await page.getByRole("button", { name: "Show" }).click();
+    await page.waitForURL(/sort=due/);
+    await expect(page.locator("tr[data-tank]").evaluateAll((rows) => rows.map((r) => r.getAttribute("data-tank")))).resolves.toEqual(["No. 1 WBT P", "No. 1 WBT P", "No. 2 WBT S", "No. 3 WBT P", "No. 2 WBT P"]);
+    await expect(page.locator('select[name="sort"]').inputValue()).resolves.toBe("due");
+
+    // From the fleet, the tank code opens the tank's history.
+    await page.locator('tr[data-tank="No. 3 WBT P"] a[data-link="history"]').click();
+    await page.waitForURL(/\/tanks\/[0-9a-f-]+\/history$/);
+    await page.getByRole("heading", { name: "No. 3 WBT P history" }).waitFor();
+
     await page.goto(`${baseUrl}/fleet?dueWithin=soon`);
     await page.getByText("These filters cannot be used").waitFor();
     await page.screenshot({ path: path.join(ARTIFACTS, "fleet-overview-bad-filter.png"), fullPage: true });
+
+    await page.goto(`${baseUrl}/fleet?page=99`);
+    await page.getByText("There is no page 99: the list has 1 page.").waitFor();
+    await page.screenshot({ path: path.join(ARTIFACTS, "fleet-overview-past-last-page.png"), fullPage: true });
+    await page.goto(`${baseUrl}/fleet?vessel=${s.otherVessel.id}`);
+    await page.getByText("This record does not exist or is not open to you.").waitFor();
+    await page.screenshot({ path: path.join(ARTIFACTS, "fleet-not-found.png"), fullPage: true });
+    const back = page.getByRole("navigation", { name: "Where to go" }).getByRole("link");
+    await expect(back.evaluateAll((links) => links.map((a) => a.getAttribute("href")))).resolves.toEqual(["/", "/fleet", "/vessels"]);
+
+    await page.setViewportSize({ width: 768, height: 900 });
+    await page.goto(`${baseUrl}/fleet?sort=due`);
+    await page.getByRole("heading", { name: "Fleet" }).waitFor();
+    await page.screenshot({ path: path.join(ARTIFACTS, "fleet-overview-768.png"), fullPage: true });
   });
 });

@@ -151,7 +151,9 @@ describe("ratings and due dates (today 2026-03-10)", () => {
   });
 
   it("counts by SQL aggregate", () => {
-    expect(o.counts).toEqual({ tanks: 9, overdue: 2, dueSoon: 1, poor: 1, fair: 2, good: 3, unrated: 1, neverInspected: 2, matching: 9 });
+    // dueSoon counts what dueWithin=30 lists, due by 2026-04-09: FT-B and FT-S2 (overdue, 2026-02-28),
+    // FT-S3 (2026-03-20) and the two never inspected "No. 1 WBT P" = 5. FT-S1 (2026-06-30) and later are not.
+    expect(o.counts).toEqual({ tanks: 9, overdue: 2, dueSoon: 5, poor: 1, fair: 2, good: 3, unrated: 1, neverInspected: 2, matching: 9 });
   });
 });
 
@@ -172,9 +174,28 @@ describe("filters and paging", () => {
     expect(codesOf(soon)).toEqual([codes.fair, codes.sFair, codes.sSoon, "No. 1 WBT P", "No. 1 WBT P"].sort());
     expect(soon.counts.matching).toBe(5);
     expect(soon.counts.tanks).toBe(9);
+    // The "Due within 30 days" card links to dueWithin=30: it counts exactly the tanks that link lists.
+    expect(soon.counts.dueSoon).toBe(soon.counts.matching);
     const sib = await getFleetOverviewAs(actor, query({ vessel: s.siblingVessel.id, rating: "FAIR" }), TODAY);
     expect(codesOf(sib)).toEqual([codes.sFair]);
     expect(sib.counts).toMatchObject({ tanks: 4, fair: 1, good: 2, neverInspected: 1, matching: 1 });
+  });
+
+  it("sort=due: due now (never inspected) first, then overdue oldest first, then the soonest; by vessel on a tie", async () => {
+    // By hand (today 2026-03-10): the two never inspected (no due date: "Own vessel" before "Sibling vessel"),
+    // FT-B and FT-S2 both 2026-02-28 (own vessel first), FT-S3 2026-03-20, FT-S1 2026-06-30,
+    // FT-D 2026-07-10, FT-C 2026-08-15, FT-A 2027-01-31.
+    const inOrder = (o: TFleetOverview) => o.tanks.map((t) => `${t.vesselId === s.ownVessel.id ? "own" : "sib"} ${t.code}`);
+    const expected = ["own No. 1 WBT P", "sib No. 1 WBT P", `own ${codes.fair}`, `sib ${codes.sFair}`, `sib ${codes.sSoon}`, `sib ${codes.sGood}`, `own ${codes.unrated}`, `own ${codes.poor}`, `own ${codes.good}`];
+    expect(inOrder(await getFleetOverviewAs(actor, query({ sort: "due" }), TODAY))).toEqual(expected);
+    // Sorted in SQL before LIMIT/OFFSET: page 2 of 4 holds the 5th to 8th of that order.
+    const page2 = await getFleetOverviewAs(actor, query({ sort: "due", pageSize: "4", page: "2" }), TODAY);
+    expect(inOrder(page2)).toEqual(expected.slice(4, 8));
+    expect(page2.query.sort).toBe("due");
+    // The default stays by vessel: the five tanks of "Own vessel" before the four of "Sibling vessel".
+    const byVessel = await getFleetOverviewAs(actor, query({}), TODAY);
+    expect(byVessel.query.sort).toBe("vessel");
+    expect(inOrder(byVessel).map((x) => x.slice(0, 3))).toEqual(["own", "own", "own", "own", "own", "sib", "sib", "sib", "sib"]);
   });
 
   it("pages on the server: disjoint pages that together hold every tank once", async () => {
@@ -251,8 +272,26 @@ describe("GET /api/v1/fleet and the page, by role", () => {
     expect((await surveyor.request("/fleet")).status).toBe(404);
   });
 
+  // Its links back are followed in tests/e2e/fleet.test.ts.
+  it("the 404 page of the signed-in app says the record does not exist or is not open to you", async () => {
+    for (const [who, client, path] of [
+      ["officer, another vessel", officer, `/fleet?vessel=${s.siblingVessel.id}`],
+      ["officer, another company's vessel", officer, `/fleet?vessel=${s.otherVessel.id}`],
+      ["officer, no such vessel", officer, `/fleet?vessel=${randomUUID()}`],
+      ["surveyor", surveyor, "/fleet"],
+    ] as const) {
+      const res = await client.request(path);
+      expect(res.status, who).toBe(404);
+      const html = await res.text();
+      expect(html, who).toContain("This record does not exist or is not open to you.");
+      expect(html, who).toContain("it belongs to a vessel or company your account does not cover");
+      expect(html, who).not.toContain(s.siblingVessel.name);
+      expect(html, who).not.toContain(s.otherVessel.name);
+    }
+  });
+
   it("bad filter values: 400 naming the parameter from the API, a message on the page", async () => {
-    for (const [q, path] of [["dueWithin=abc", "dueWithin"], ["dueWithin=-3", "dueWithin"], ["rating=BAD", "rating"], ["page=0", "page"], ["pageSize=5000", "pageSize"], ["vessel=not-an-id", "vessel"]] as const) {
+    for (const [q, path] of [["dueWithin=abc", "dueWithin"], ["dueWithin=-3", "dueWithin"], ["rating=BAD", "rating"], ["page=0", "page"], ["pageSize=5000", "pageSize"], ["vessel=not-an-id", "vessel"], ["sort=worst", "sort"]] as const) {
       const res = await superintendent.request(`/api/v1/fleet?${q}`);
       expect(res.status, q).toBe(400);
       expect(((await res.json()) as TErr).error.issues.map((i) => i.path)).toEqual([path]);
@@ -268,5 +307,42 @@ describe("GET /api/v1/fleet and the page, by role", () => {
   it("the page shows ratings as words with the counts", async () => {
     const html = await (await superintendent.request(`/fleet?vessel=${s.ownVessel.id}`)).text();
     for (const word of ["GOOD", "FAIR", "POOR", "Never inspected", "Overdue", codes.fair, "2026-02-28"]) expect(html).toContain(word);
+  });
+
+  it("with a vessel filter the subtitle counts that vessel only", async () => {
+    // The superintendent may choose between 2 vessels; the own vessel holds FT-A…FT-D and No. 1 WBT P = 5 tanks.
+    const html = await (await superintendent.request(`/fleet?vessel=${s.ownVessel.id}`)).text();
+    expect(html).toContain("1 vessel · 5 ballast tanks");
+    // Without it: the company's 2 vessels and their 9 tanks.
+    expect(await (await superintendent.request("/fleet")).text()).toContain("2 vessels · 9 ballast tanks");
+  });
+
+  it("the legend lists Not rated and Never inspected with different swatches; the tank code opens its history", async () => {
+    const html = await (await superintendent.request(`/fleet?vessel=${s.ownVessel.id}`)).text();
+    const legend = html.slice(html.indexOf('aria-label="Legend"'));
+    expect(legend).toContain('data-swatch="unrated"');
+    expect(legend).toContain('data-swatch="never"');
+    expect(legend).toContain("Not rated");
+    // Both dashed outlines; only "unrated" carries the dot.
+    const swatch = (kind: string) => legend.slice(legend.indexOf(`data-swatch="${kind}"`), legend.indexOf("</svg>", legend.indexOf(`data-swatch="${kind}"`)));
+    expect(swatch("unrated")).toContain("<circle");
+    expect(swatch("never")).not.toContain("<circle");
+    const ftA = (await getFleetOverviewAs(await actorOf(s.users.superintendent.id), query({ vessel: s.ownVessel.id }), TODAY)).tanks.find((t) => t.code === codes.good)!;
+    expect(html).toContain(`href="/vessels/${s.ownVessel.id}/tanks/${ftA.tankId}/history"`);
+  });
+
+  it("a page past the last says so and links to the last page; sort is kept in the pager's links", async () => {
+    // 9 tanks in 50s: 1 page.
+    const past = await (await superintendent.request("/fleet?page=99")).text();
+    expect(past).toContain("There is no page 99: the list has 1 page.");
+    expect(past).toMatch(/<a[^>]*href="\/fleet"[^>]*>Go to page 1<\/a>/);
+    expect(past).not.toContain("rel=\"prev\"");
+    expect(past).not.toContain("No tank matches these filters.");
+    // 9 tanks in 4s: 3 pages; from page 5 the last is 3, with the sort and page size kept.
+    const sorted = await (await superintendent.request("/fleet?sort=due&pageSize=4&page=5")).text();
+    expect(sorted).toContain("There is no page 5: the list has 3 pages.");
+    expect(sorted).toContain('href="/fleet?sort=due&amp;page=3&amp;pageSize=4"');
+    const first = await (await superintendent.request("/fleet?sort=due&pageSize=4")).text();
+    expect(first).toContain('href="/fleet?sort=due&amp;page=2&amp;pageSize=4"');
   });
 });

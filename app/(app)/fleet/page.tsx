@@ -25,6 +25,7 @@ function fleetHref(q: Partial<TFleetQuery>) {
   if (q.vessel) p.set("vessel", q.vessel);
   if (q.rating) p.set("rating", q.rating);
   if (q.dueWithin !== undefined) p.set("dueWithin", String(q.dueWithin));
+  if (q.sort && q.sort !== "vessel") p.set("sort", q.sort);
   if (q.page && q.page > 1) p.set("page", String(q.page));
   if (q.pageSize && q.pageSize !== 50) p.set("pageSize", String(q.pageSize));
   const s = p.toString();
@@ -35,7 +36,7 @@ export default async function FleetPage({ searchParams }: { searchParams: Promis
   const actor = await pageActor();
   const params = await searchParams;
   const parsed = await pageAuthorize(() => authorizeFleetQuery(actor, params));
-  const raw = { vessel: one(params.vessel), rating: one(params.rating), dueWithin: one(params.dueWithin) };
+  const raw = { vessel: one(params.vessel), rating: one(params.rating), dueWithin: one(params.dueWithin), sort: one(params.sort) };
 
   if (!parsed.success) {
     const { orgId, vesselIds } = await pageAuthorize(() => resolveFleetScope(actor));
@@ -61,21 +62,25 @@ export default async function FleetPage({ searchParams }: { searchParams: Promis
   const overview = await getFleetOverviewAs(actor, q);
   const scopeName = q.vessel ? overview.vessels.find((v) => v.id === q.vessel)?.name : undefined;
   const showVesselList = !q.vessel && overview.vessels.length > 1;
+  // The vessels the tanks and counts cover: the one filtered by, else every vessel the actor may choose.
+  const vesselsInScope = q.vessel ? 1 : overview.vessels.length;
+  // Past the last page the pager says so; "no tank matches" would be untrue.
+  const pastLastPage = overview.paging.page > overview.paging.totalPages;
   const intervals = keepsIntervals(actor, overview.orgId) ? await listIntervalsAs(actor) : null;
   return (
     <>
       <PageHeader
         title={scopeName ? `Fleet · ${scopeName}` : "Fleet"}
-        subtitle={`${overview.vessels.length} vessel${overview.vessels.length === 1 ? "" : "s"} · ${overview.counts.tanks} ballast tanks · dates as of ${overview.today} (UTC)`}
+        subtitle={`${vesselsInScope} vessel${vesselsInScope === 1 ? "" : "s"} · ${overview.counts.tanks} ballast tanks · dates as of ${overview.today} (UTC)`}
       />
       <div className="space-y-4">
-        <FleetCounts counts={overview.counts} dueSoonDays={DUE_SOON_DAYS} hrefFor={(f) => fleetHref({ vessel: q.vessel, ...f })} />
+        <FleetCounts counts={overview.counts} dueSoonDays={DUE_SOON_DAYS} hrefFor={(f) => fleetHref({ vessel: q.vessel, sort: q.sort, ...f })} />
         <FleetFilters vessels={overview.vessels} values={{ ...raw }} />
         <p className="flex flex-wrap gap-4 text-xs text-slate-600" aria-label="Legend">
-          <RatingMark kind="GOOD" /> <RatingMark kind="FAIR" /> <RatingMark kind="POOR" /> <RatingMark kind="never" />
-          <span>Ratings from the latest countersigned report; a tank takes the rating of its worst area (IMO MSC.1/Circ.1330).</span>
+          <RatingMark kind="GOOD" /> <RatingMark kind="FAIR" /> <RatingMark kind="POOR" /> <RatingMark kind="unrated" /> <RatingMark kind="never" />
+          <span>Ratings from the latest countersigned report; a tank takes the rating of its worst area (IMO MSC.1/Circ.1330). Not rated: countersigned without a coating record.</span>
         </p>
-        {overview.tanks.length ? <FleetTankTable tanks={overview.tanks} /> : <Notice>No tank matches these filters.</Notice>}
+        {overview.tanks.length ? <FleetTankTable tanks={overview.tanks} /> : pastLastPage ? null : <Notice>No tank matches these filters.</Notice>}
         <Pager noun="Tanks" {...overview.paging} hrefFor={(page) => fleetHref({ ...q, page })} />
         {intervals ? <IntervalSettings company={intervals.company} overrides={intervals.vessels} vessels={overview.vessels.map((v) => ({ id: v.id, name: v.name }))} /> : null}
         {showVesselList ? (
