@@ -59,12 +59,12 @@ function datedTanks(scope: TFleetScope): SQL {
       select t.id as tank_id, t.vessel_id, t.code, t.name as tank_name, t.kind, t.side, t.coating_system, t.sort_order,
              v.name as vessel_name, v.vessel_type,
              tl.inspection_id, tl.inspected_on, tl.revision,
-             iv.default_months, iv.below_good_months, ${rank} as rating_rank
+             iv.default_months, iv.below_good_months, iv.vessel_id is not null as intervals_vessel_own, ${rank} as rating_rank
       from tanks t
       join vessels v on v.id = t.vessel_id and v.org_id = ${orgId}::uuid
       left join tank_latest_inspections tl on tl.tank_id = t.id and tl.org_id = ${orgId}::uuid
       left join lateral (
-        select ii.default_months, ii.below_good_months from inspection_intervals ii
+        select ii.default_months, ii.below_good_months, ii.vessel_id from inspection_intervals ii
         where ii.org_id = ${orgId}::uuid and (ii.vessel_id = t.vessel_id or ii.vessel_id is null)
         order by ii.vessel_id nulls last
         limit 1
@@ -104,7 +104,8 @@ export type TFleetTankRow = {
   inspectionId: string | null;
   inspectedOn: string | null;
   revision: number | null;
-  intervals: { defaultMonths: number; belowGoodMonths: number } | null;
+  /** vesselOwn: the vessel's own inspection_intervals row applies, not the company's. */
+  intervals: { defaultMonths: number; belowGoodMonths: number; vesselOwn: boolean } | null;
   /** SQL's rank (0 GOOD, 1 FAIR, 2 POOR, null unrated): for the parity test; the page shows lib's rating. */
   ratingRank: number | null;
   dueOn: string | null;
@@ -116,7 +117,7 @@ export async function listFleetTanks({ scope, filters, sort = "vessel", limit, o
     ${datedTanks(scope)}
     select tank_id, vessel_id, vessel_name, vessel_type, code, tank_name, kind, side, coating_system,
            inspection_id, to_char(inspected_on, 'YYYY-MM-DD') as inspected_on, revision,
-           default_months, below_good_months, rating_rank, to_char(due_on, 'YYYY-MM-DD') as due_on
+           default_months, below_good_months, intervals_vessel_own, rating_rank, to_char(due_on, 'YYYY-MM-DD') as due_on
     from dated
     where ${filterWhere(filters, scope.today)}
     order by ${ORDER_BY[sort]}
@@ -134,7 +135,7 @@ export async function listFleetTanks({ scope, filters, sort = "vessel", limit, o
     inspectionId: (r.inspection_id as string | null) ?? null,
     inspectedOn: (r.inspected_on as string | null) ?? null,
     revision: r.revision === null ? null : Number(r.revision),
-    intervals: r.default_months === null ? null : { defaultMonths: Number(r.default_months), belowGoodMonths: Number(r.below_good_months) },
+    intervals: r.default_months === null ? null : { defaultMonths: Number(r.default_months), belowGoodMonths: Number(r.below_good_months), vesselOwn: r.intervals_vessel_own === true },
     ratingRank: r.rating_rank === null ? null : Number(r.rating_rank),
     dueOn: (r.due_on as string | null) ?? null,
   }));

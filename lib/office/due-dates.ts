@@ -11,7 +11,8 @@ import type { TRating } from "@/lib/calc/coating";
 import type { COATING_SYSTEMS, TInspectionStatus, TTankKind, TVesselType } from "@/lib/vocabulary";
 
 export type TCoatingSystem = (typeof COATING_SYSTEMS)[number];
-export type TIntervals = { defaultMonths: number; belowGoodMonths: number };
+/** vesselOwn: the vessel's own row applies rather than the company's (absent: the company's). */
+export type TIntervals = { defaultMonths: number; belowGoodMonths: number; vesselOwn?: boolean };
 
 // ---------------------------------------------------------------- calendar dates
 
@@ -61,7 +62,7 @@ export function latestCountersigned<T extends { status: TInspectionStatus; inspe
 /** The intervals that apply to a vessel: its own row if the company set one, else the company's row (vesselId null). */
 export function intervalsForVessel<T extends TIntervals & { vesselId: string | null }>(rows: readonly T[], vesselId: string): TIntervals | null {
   const row = rows.find((r) => r.vesselId === vesselId) ?? rows.find((r) => r.vesselId === null);
-  return row ? { defaultMonths: row.defaultMonths, belowGoodMonths: row.belowGoodMonths } : null;
+  return row ? { defaultMonths: row.defaultMonths, belowGoodMonths: row.belowGoodMonths, vesselOwn: row.vesselId !== null } : null;
 }
 
 // ---------------------------------------------------------------- class-rule reasons
@@ -142,7 +143,7 @@ export type TDueDate = {
  * rated (our choice: an unknown rating is not taken as GOOD).
  */
 export function nextInspectionDue({ tank, last, intervals, today }: { tank: TDueTank; last: { inspectedOn: string; rating: TRating | null } | null; intervals: TIntervals; today: string }): TDueDate {
-  for (const [name, v] of Object.entries(intervals)) if (!Number.isInteger(v) || v <= 0) throw new RangeError(`${name} must be a whole number of months above 0`);
+  for (const [name, v] of Object.entries({ defaultMonths: intervals.defaultMonths, belowGoodMonths: intervals.belowGoodMonths })) if (!Number.isInteger(v) || v <= 0) throw new RangeError(`${name} must be a whole number of months above 0`);
   parseIsoDate(today); // a malformed "today" is refused even when there is no due date to compare it with
   if (!last) {
     return {
@@ -157,19 +158,20 @@ export function nextInspectionDue({ tank, last, intervals, today }: { tank: TDue
     };
   }
   const shorter = Math.min(intervals.belowGoodMonths, intervals.defaultMonths);
+  const whose = intervals.vesselOwn ? "the vessel's own" : "the company's";
   const reasons: TDueReason[] = [];
   let intervalMonths: number;
   if (last.rating === "GOOD") {
     intervalMonths = intervals.defaultMonths;
-    reasons.push({ kind: "interval", text: `Coating GOOD: the company's interval of ${months(intervalMonths)} applies.` });
+    reasons.push({ kind: "interval", text: `Coating GOOD: ${whose} interval of ${months(intervalMonths)} applies.` });
   } else if (last.rating === null) {
     intervalMonths = shorter;
-    reasons.push({ kind: "not_rated", text: `The last inspection recorded no coating condition: the shorter interval of ${months(intervalMonths)} applies until the coating is rated.` });
+    reasons.push({ kind: "not_rated", text: `The last inspection recorded no coating condition: ${whose} shorter interval of ${months(intervalMonths)} applies until the coating is rated.` });
   } else {
     intervalMonths = shorter;
     reasons.push({
       kind: "interval",
-      text: `Coating ${last.rating}, below GOOD (the tank takes the rating of its worst area): the company's shorter interval of ${months(intervalMonths)} applies.`,
+      text: `Coating ${last.rating}, below GOOD (the tank takes the rating of its worst area): ${whose} shorter interval of ${months(intervalMonths)} applies.`,
       source: "IMO MSC.1/Circ.1330 §4.2.1",
     });
   }

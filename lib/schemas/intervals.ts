@@ -1,7 +1,10 @@
 import { z } from "zod";
 
+// Only a missing value is "required"; anything else that is not a number ("abc", NaN, "12") is told what it must be.
 const months = (what: string) =>
-  z.number({ error: `is required: ${what} in months` }).int("must be a whole number of months").min(1, "must be at least 1 month").max(60, "must be at most 60 months");
+  z
+    .number({ error: (issue) => (issue.input === undefined || issue.input === null ? `is required: ${what} in months` : "must be a whole number of months") })
+    .int("must be a whole number of months").min(1, "must be at least 1 month").max(60, "must be at most 60 months");
 
 /** The company's inspection intervals (vesselId absent), or one vessel's own (which then take precedence). */
 export const ZIntervalsInput = z

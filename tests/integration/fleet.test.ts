@@ -144,6 +144,13 @@ describe("ratings and due dates (today 2026-03-10)", () => {
     expect(byCode(o, codes.sSoon).due).toMatchObject({ dueOn: "2026-03-20", daysUntilDue: 10 });
   });
 
+  it("the reason names whose interval applies: the sibling vessel's own row (6/3), the company's for the own vessel (12/6)", () => {
+    expect(byCode(o, codes.sGood).reasons[0]!.text).toBe("Coating GOOD: the vessel's own interval of 6 months applies.");
+    expect(byCode(o, codes.sFair).reasons[0]!.text).toBe("Coating FAIR, below GOOD (the tank takes the rating of its worst area): the vessel's own shorter interval of 3 months applies.");
+    expect(byCode(o, codes.good).reasons[0]!.text).toBe("Coating GOOD: the company's interval of 12 months applies.");
+    expect(byCode(o, codes.fair).reasons[0]!.text).toBe("Coating FAIR, below GOOD (the tank takes the rating of its worst area): the company's shorter interval of 6 months applies.");
+  });
+
   it("a tank with only a draft is never inspected and due now", () => {
     const never = o.tanks.filter((t) => t.code === "No. 1 WBT P");
     expect(never).toHaveLength(2);

@@ -34,7 +34,12 @@ describe("inspection intervals", () => {
     expect(longer.status).toBe(400);
     expect(((await longer.json()) as TErr).error.issues[0]!.path).toBe("belowGoodMonths");
     expect((await put(superintendent, { defaultMonths: 0, belowGoodMonths: 0 })).status).toBe(400);
-    expect((await put(superintendent, { defaultMonths: "twelve", belowGoodMonths: 6 })).status).toBe(400);
+    const word = await put(superintendent, { defaultMonths: "twelve", belowGoodMonths: 6 });
+    expect(word.status).toBe(400);
+    // Not a number is not "required": the field was there.
+    expect(((await word.json()) as TErr).error.issues).toEqual([{ path: "defaultMonths", message: "must be a whole number of months" }]);
+    const missing = await put(superintendent, { belowGoodMonths: 6 });
+    expect(((await missing.json()) as TErr).error.issues).toEqual([{ path: "defaultMonths", message: "is required: the interval for tanks rated GOOD in months" }]);
     expect((await put(superintendent, { vesselId: s.otherVessel.id, defaultMonths: 12, belowGoodMonths: 6 })).status).toBe(404);
     expect((await put(officer, { defaultMonths: 24, belowGoodMonths: 12 })).status).toBe(403);
     const company = await testDb().query.inspectionIntervals.findFirst({ where: (t, { and, eq: is, isNull }) => and(is(t.orgId, s.org.id), isNull(t.vesselId)) });

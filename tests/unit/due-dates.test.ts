@@ -158,8 +158,31 @@ describe("which inspection and which intervals count", () => {
       { vesselId: null, defaultMonths: 12, belowGoodMonths: 6 },
       { vesselId: "v2", defaultMonths: 6, belowGoodMonths: 3 },
     ];
-    expect(intervalsForVessel(rows, "v2")).toEqual({ defaultMonths: 6, belowGoodMonths: 3 });
-    expect(intervalsForVessel(rows, "v1")).toEqual({ defaultMonths: 12, belowGoodMonths: 6 });
+    expect(intervalsForVessel(rows, "v2")).toEqual({ defaultMonths: 6, belowGoodMonths: 3, vesselOwn: true });
+    expect(intervalsForVessel(rows, "v1")).toEqual({ defaultMonths: 12, belowGoodMonths: 6, vesselOwn: false });
     expect(intervalsForVessel([], "v1")).toBeNull();
+  });
+});
+
+describe("the reason says whose interval applies: the vessel's own row or the company's", () => {
+  const own = { defaultMonths: 6, belowGoodMonths: 3, vesselOwn: true };
+  it("a vessel's own row: GOOD takes its 6 months, FAIR and unrated its shorter 3", () => {
+    // GOOD: 2025-12-31 + 6 months = 2026-06-30 (the vessel's default)
+    const good = nextInspectionDue({ tank: boxShip, last: { inspectedOn: "2025-12-31", rating: "GOOD" }, intervals: own, today: "2026-03-10" });
+    expect(good.dueOn).toBe("2026-06-30");
+    expect(good.reasons[0]?.text).toBe("Coating GOOD: the vessel's own interval of 6 months applies.");
+    // FAIR: 2025-11-30 + 3 months = 2026-02-28 (clamped), the vessel's below-GOOD interval
+    const fair = nextInspectionDue({ tank: boxShip, last: { inspectedOn: "2025-11-30", rating: "FAIR" }, intervals: own, today: "2026-03-10" });
+    expect(fair.dueOn).toBe("2026-02-28");
+    expect(fair.reasons[0]?.text).toBe("Coating FAIR, below GOOD (the tank takes the rating of its worst area): the vessel's own shorter interval of 3 months applies.");
+    expect(fair.reasons[0]?.text).not.toContain("company");
+    const unrated = nextInspectionDue({ tank: boxShip, last: { inspectedOn: "2026-01-10", rating: null }, intervals: own, today: "2026-03-10" });
+    expect(unrated.reasons[0]?.text).toBe("The last inspection recorded no coating condition: the vessel's own shorter interval of 3 months applies until the coating is rated.");
+  });
+  it("the company's row (vesselOwn false or absent) says the company's", () => {
+    const fair = nextInspectionDue({ tank: boxShip, last: { inspectedOn: "2025-08-31", rating: "FAIR" }, intervals: { ...intervals, vesselOwn: false }, today: "2026-03-02" });
+    expect(fair.reasons[0]?.text).toBe("Coating FAIR, below GOOD (the tank takes the rating of its worst area): the company's shorter interval of 6 months applies.");
+    const good = nextInspectionDue({ tank: boxShip, last: { inspectedOn: "2025-03-14", rating: "GOOD" }, intervals, today: "2026-01-10" });
+    expect(good.reasons[0]?.text).toBe("Coating GOOD: the company's interval of 12 months applies.");
   });
 });
