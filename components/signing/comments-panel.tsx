@@ -5,6 +5,8 @@ import { Button } from "@/components/ui/button";
 import { Notice } from "@/components/ui/notice";
 import { postJson } from "./api";
 
+const COMMENT_ADDED = "Comment added; the vessel's officers and master are told by e-mail.";
+
 type TComment = { id: string; kind: string; body: string; createdAt: string; findingNumber: number | null; authorName: string; authorRank: string | null };
 
 /** The office's comments on the report and its findings, read by the ship; the office writes them. */
@@ -12,7 +14,8 @@ export function CommentsPanel({ inspectionId, findings }: { inspectionId: string
   const [data, setData] = useState<{ comments: TComment[]; canComment: boolean } | null>(null);
   const [body, setBody] = useState("");
   const [findingId, setFindingId] = useState("");
-  const [error, setError] = useState<string | null>(null);
+  // After a send: a confirmation, or the refusal (the typed text is kept).
+  const [result, setResult] = useState<{ tone: "success" | "error"; text: string } | null>(null);
   const load = useCallback(async () => {
     const res = await fetch(`/api/v1/inspections/${inspectionId}/comments`, { cache: "no-store" });
     if (res.ok) setData(await res.json());
@@ -25,9 +28,9 @@ export function CommentsPanel({ inspectionId, findings }: { inspectionId: string
     if (res.ok) {
       setBody("");
       setFindingId("");
-      setError(null);
+      setResult({ tone: "success", text: COMMENT_ADDED });
       await load();
-    } else setError(res.message);
+    } else setResult({ tone: "error", text: res.message });
   }
 
   if (!data) return null;
@@ -48,7 +51,7 @@ export function CommentsPanel({ inspectionId, findings }: { inspectionId: string
       ) : <p className="mt-1 text-slate-600">No comments yet.</p>}
       {data.canComment ? (
         <form onSubmit={send} className="mt-3 space-y-2" aria-label="Add a comment">
-          {error ? <Notice tone="error">{error}</Notice> : null}
+          {result ? <Notice tone={result.tone}>{result.text}</Notice> : null}
           <div className="flex flex-wrap gap-2">
             <label className="block">
               <span className="block font-semibold text-slate-800">About</span>
