@@ -1,11 +1,12 @@
 // The demo scenario: a fictional ship manager with two fictional vessels. The
 // IMO-style numbers start with 0 so that they pass the check digit yet belong
 // to no ship. Nothing here is used as an expected value of the trade in tests.
-import { eq } from "drizzle-orm";
+import { and, eq } from "drizzle-orm";
 import type { TDb } from "../client";
 import * as s from "../schema";
 import { insertMembership, insertOrganisation, insertTank, insertUser, insertVessel } from "./builders";
 import { fillInspection } from "./complete-inspection";
+import { sedimentVolumeM3 } from "@/lib/calc/sediment";
 
 export const DEMO_ORG_SLUG = "lantern-reach";
 export const DEMO_PASSWORD = "tankwright-demo";
@@ -113,6 +114,29 @@ export async function seedDemo(db: TDb): Promise<boolean> {
       { orgId, inspectionId: earlier!.id, userId: users.officer!, kind: "officer", signerName: "Maren Oduya", signerRank: "Chief Officer", typedSignature: "Maren Oduya", signedAt },
       { orgId, inspectionId: earlier!.id, userId: users.master!, kind: "master", signerName: "Tomas Revell", signerRank: "Master", typedSignature: "Tomas Revell", signedAt },
     ]);
+
+    // Two older reports of the same tank, so that its history has a trend: the shell plating's breakdown
+    // growing (1.5 → 2.5 → 4 %), the anodes wasting about 10 % a year (10 → 20 → 30 %, so the company's 50 %
+    // renewal threshold is projected two years on), sediment building up (0.4 → 0.7 → 1.0 m³), and the same
+    // two coating findings found again at the same frames (marked recurring).
+    for (const old of [
+      { inspectedOn: "2024-05-20", signedAt: new Date("2024-05-21T03:00:00Z"), shellPct: 1.5, wastagePct: 10, depthMm: 20, place: "Port Averly, berth 2" },
+      { inspectedOn: "2025-05-15", signedAt: new Date("2025-05-16T02:40:00Z"), shellPct: 2.5, wastagePct: 20, depthMm: 35, place: "Averly Roads anchorage" },
+    ]) {
+      const [row] = await tx.insert(s.inspections).values({
+        orgId, vesselId: skerry.id, tankId: earlierTank!.id, inspectedOn: old.inspectedOn, placeKind: "anchorage", place: old.place,
+        team: ["Maren Oduya, Chief Officer", "Pell Arkady, Bosun"], createdBy: users.officer!,
+      }).returning();
+      await fillInspection(tx, { orgId, inspectionId: row!.id, frameFrom: earlierTank!.frameFrom, testedAt: new Date(`${old.inspectedOn}T01:30:00Z`), measuredBy: "Maren Oduya", standbyPerson: "Pell Arkady, Bosun" });
+      await tx.update(s.coatingAreas).set({ breakdownPct: old.shellPct, rustedPct: old.shellPct / 2 }).where(and(eq(s.coatingAreas.inspectionId, row!.id), eq(s.coatingAreas.area, "shell_plating")));
+      await tx.update(s.anodeRecords).set({ meanWastagePct: old.wastagePct, minWastagePct: old.wastagePct / 2, maxWastagePct: old.wastagePct * 2, toRenewCount: 0 }).where(eq(s.anodeRecords.inspectionId, row!.id));
+      await tx.update(s.sedimentZones).set({ depthMm: old.depthMm, volumeM3: sedimentVolumeM3({ depthMm: old.depthMm, areaM2: 20 }) }).where(eq(s.sedimentZones.inspectionId, row!.id));
+      await tx.update(s.inspections).set({ status: "countersigned", submittedAt: old.signedAt, countersignedAt: old.signedAt, lockedAt: old.signedAt, version: 3 }).where(eq(s.inspections.id, row!.id));
+      await tx.insert(s.signatures).values([
+        { orgId, inspectionId: row!.id, userId: users.officer!, kind: "officer", signerName: "Maren Oduya", signerRank: "Chief Officer", typedSignature: "Maren Oduya", signedAt: old.signedAt },
+        { orgId, inspectionId: row!.id, userId: users.master!, kind: "master", signerName: "Tomas Revell", signerRank: "Master", typedSignature: "Tomas Revell", signedAt: old.signedAt },
+      ]);
+    }
   });
   return true;
 }
