@@ -1,13 +1,16 @@
 // A tank's history as a PDF: every inspection with its signed PDF's link and
 // fingerprint, the three plots drawn from the page's own layout
-// (lib/office/history-plots.ts), the anode projection and the recurring
+// (lib/office/history-plots.ts) with the page's data tables under them
+// (lib/office/history-tables.ts), the anode projection and the recurring
 // findings. Every figure comes from lib/services/history.ts; nothing is computed here.
 import { Document, Link, Page, StyleSheet, Text, View } from "@react-pdf/renderer";
 import type { THistoryPlots } from "@/lib/office/history-plots";
+import type { THistoryTable, THistoryTables } from "@/lib/office/history-tables";
 import type { TTankHistory } from "@/lib/services/history";
 import { formatFrames } from "@/lib/structure/frames";
 import { FINDING_TYPE_LABELS, INSPECTION_STATUS_LABELS, MEMBER_KIND_LABELS, PLATING_REGION_LABELS } from "@/lib/vocabulary";
 import { PDF_FONT_FAMILY } from "./fonts";
+import { DataTablePdf } from "./parts/data-table-pdf";
 import { LineChartPdf } from "./parts/line-chart-pdf";
 
 const NAVY = "#12253a";
@@ -37,17 +40,24 @@ const s = StyleSheet.create({
   small: { color: "#475569" },
 });
 
-export function TankHistoryDocument({ history: h, plots, preparedAt, appUrl }: { history: TTankHistory; plots: THistoryPlots; preparedAt: string; appUrl: string }) {
+export function TankHistoryDocument({ history: h, plots, tables, preparedAt, appUrl }: { history: TTankHistory; plots: THistoryPlots; tables: THistoryTables; preparedAt: string; appUrl: string }) {
   const title = `Tank history: ${h.tank.code}`;
   const recurring = h.findings.filter((f) => f.recurring);
   const projection = h.anodes.projection;
-  const plot = (heading: string, chart: THistoryPlots[keyof THistoryPlots], note?: string) => (
-    <View wrap={false}>
-      <Text style={s.h2}>{heading}</Text>
-      {chart.empty ? <Text style={s.small}>No signed measurements yet.</Text> : <LineChartPdf chart={chart} width={CHART_WIDTH} />}
-      {note ? <Text style={s.note}>{note}</Text> : null}
-    </View>
+  const plot = (heading: string, chart: THistoryPlots[keyof THistoryPlots], table: THistoryTable, widths: { first: number; column: number }, note?: string) => (
+    <>
+      <View wrap={false}>
+        <Text style={s.h2}>{heading}</Text>
+        {chart.empty ? <Text style={s.small}>No signed measurements yet.</Text> : <LineChartPdf chart={chart} width={CHART_WIDTH} />}
+        {note ? <Text style={s.note}>{note}</Text> : null}
+      </View>
+      {table.rows.length ? <DataTablePdf table={table} firstWidth={widths.first} columnWidth={widths.column} /> : null}
+    </>
   );
+  // The coating table's date columns share what the area column leaves of the chart's width.
+  const coatingDates = Math.max(1, tables.coating.head.length - 1);
+  const coatingWidths = { first: 130, column: Math.min(80, (CHART_WIDTH - 130) / coatingDates) };
+  const narrow = { first: 70, column: 80 };
   return (
     <Document title={`${title} ${h.vessel.name}`} author="Tankwright" subject="Tank history">
       <Page size="A4" style={s.page} wrap>
@@ -79,21 +89,24 @@ export function TankHistoryDocument({ history: h, plots, preparedAt, appUrl }: {
         ))}
         {h.inspections.length ? null : <Text style={s.small}>This tank has not been inspected yet.</Text>}
 
-        {plot("Coating breakdown per area", plots.coating)}
+        {plot("Coating breakdown per area", plots.coating, tables.coating, coatingWidths)}
         {plot(
           "Mean anode wastage",
           plots.anodes,
+          tables.anodes,
+          narrow,
           projection
             ? `At ${projection.ratePctPerYear.toFixed(1)} % a year (least-squares line through the signed inspections), the mean wastage reaches the company's renewal threshold of ${h.anodes.thresholdPct.toFixed(0)} % on ${projection.date}.`
             : "No projection: it needs two signed inspections on different dates with growing wastage.",
         )}
-        {plot("Sediment volume", plots.sediment)}
+        {plot("Sediment volume", plots.sediment, tables.sediment, narrow)}
 
-        <Text style={s.h2}>Findings found again</Text>
-        <Text style={[s.small, { marginBottom: 3 }]}>A finding is recurring when a later signed inspection finds the same type of defect on the same member (kind, number, plating region) at overlapping frames.</Text>
+        {/* The heading, its explanation and the table's head stay with the first row. */}
+        <Text style={s.h2} minPresenceAhead={80}>Findings found again</Text>
+        <Text style={[s.small, { marginBottom: 3 }]} minPresenceAhead={50}>A finding is recurring when a later signed inspection finds the same type of defect on the same member (kind, number, plating region) at overlapping frames.</Text>
         {recurring.length ? (
           <>
-            <View style={s.head}>
+            <View style={s.head} minPresenceAhead={30}>
               <Text style={s.date}>Date</Text>
               <Text style={s.no}>No.</Text>
               <Text style={s.finding}>Finding</Text>

@@ -48,6 +48,12 @@ function rowOf(str: string) {
   return items.filter((i) => i.page === first.page && Math.abs(i.y - first.y) < 1).sort((a, b) => a.centreX - b.centreX).map((i) => i.str);
 }
 const squash = (t: string) => t.replace(/\s+/g, "");
+/** The row of a plot's data table that starts with `first`: the last piece reading it (the axis and legend come before the table), and the pieces on its line. */
+function tableRow(piece: TPdfItem[], first: string) {
+  const at = piece.filter((i) => i.str === first).at(-1)!;
+  expect(at).toBeDefined();
+  return piece.filter((i) => i.page === at.page && Math.abs(i.y - at.y) < 1).sort((a, b) => a.centreX - b.centreX).map((i) => i.str);
+}
 
 describe("tank history PDF", () => {
   it("is a PDF download named after the vessel and tank", () => {
@@ -100,6 +106,37 @@ describe("tank history PDF", () => {
     const plot = plotItems("Sediment volume", "Findings found again");
     expect(plot.slice(0, 5).map((i) => i.str)).toEqual(["0", "1", "2", "3", "4"]);
     expect(plot.map((i) => i.str)).toContain("Sediment (m³)");
+  });
+
+  it("prints the coating data table under its plot: every area × inspection date, so that the seven areas at 1 % can be read", () => {
+    const plot = plotItems("Coating breakdown per area", "Mean anode wastage");
+    expect(tableRow(plot, "Area")).toEqual(["Area", "2024-03-01", "2025-03-01", "2026-03-01"]);
+    // Shell plating: 4, 10 and 25 % as tests/fixtures/history.ts sets them, with one decimal.
+    expect(tableRow(plot, "Shell plating")).toEqual(["Shell plating", "4.0 %", "10.0 %", "25.0 %"]);
+    // The other seven areas keep db/seed/complete-inspection.ts's 1 % at every inspection.
+    for (const area of ["Bulkhead plating", "Inner bottom / deck plating", "Stringers", "Girders and web frames", "Longitudinals and brackets", "Edges and welds", "Piping and fittings"]) {
+      expect(tableRow(plot, area)).toEqual([area, "1.0 %", "1.0 %", "1.0 %"]);
+    }
+    // The submitted inspection of 2026-06-01 (90 %) is not plotted, so it has no column.
+    expect(plot.map((i) => i.str)).not.toContain("90.0 %");
+  });
+
+  it("prints the anode data table: mean wastage and anodes to renew per date", () => {
+    const plot = plotItems("Mean anode wastage", "Sediment volume");
+    expect(tableRow(plot, "Date")).toEqual(["Date", "Mean wastage", "Anodes to renew"]);
+    // Mean wastage 20, 30, 40 % (tests/fixtures/history.ts); 1 anode to renew each time (the seed's toRenewCount, left as it is).
+    expect(tableRow(plot, "2024-03-01")).toEqual(["2024-03-01", "20.0 %", "1"]);
+    expect(tableRow(plot, "2025-03-01")).toEqual(["2025-03-01", "30.0 %", "1"]);
+    expect(tableRow(plot, "2026-03-01")).toEqual(["2026-03-01", "40.0 %", "1"]);
+  });
+
+  it("prints the sediment data table: volume (two decimals) and zones per date", () => {
+    const plot = plotItems("Sediment volume", "Findings found again");
+    expect(tableRow(plot, "Date")).toEqual(["Date", "Volume", "Zones"]);
+    // Zones of 1 m³, 2 m³, then 1 + 2.5 = 3.5 m³ in two zones (tests/fixtures/history.ts).
+    expect(tableRow(plot, "2024-03-01")).toEqual(["2024-03-01", "1.00 m³", "1"]);
+    expect(tableRow(plot, "2025-03-01")).toEqual(["2025-03-01", "2.00 m³", "1"]);
+    expect(tableRow(plot, "2026-03-01")).toEqual(["2026-03-01", "3.50 m³", "2"]);
   });
 
   it("lists the recurring findings (as tests/integration/history.test.ts marks them)", () => {

@@ -1,12 +1,13 @@
 import type { Metadata } from "next";
 import Link from "next/link";
-import { RatingMark } from "@/components/fleet/rating-mark";
+import { RatingMark } from "@/components/ui/rating-mark";
 import { HistoryPlot } from "@/components/history/history-plot";
 import { Notice } from "@/components/ui/notice";
 import { PageHeader } from "@/components/ui/page-header";
 import { Cell, Table } from "@/components/ui/table";
 import { pageActor, pageAuthorize } from "@/lib/auth/page";
 import { layoutHistoryPlots } from "@/lib/office/history-plots";
+import { buildHistoryTables } from "@/lib/office/history-tables";
 import { getTankHistoryAs } from "@/lib/services/history";
 import { formatFrames } from "@/lib/structure/frames";
 import { FINDING_TYPE_LABELS, INSPECTION_STATUS_LABELS, MEMBER_KIND_LABELS, PLATING_REGION_LABELS } from "@/lib/vocabulary";
@@ -19,9 +20,8 @@ export default async function TankHistoryPage({ params }: { params: Promise<{ ve
   const { vesselId, tankId } = await params;
   const actor = await pageActor();
   const h = await pageAuthorize(() => getTankHistoryAs(actor, vesselId, tankId));
-  const dates = [...new Set(h.coating.flatMap((s) => s.points.map((p) => p.date)))].sort();
-
   const plots = layoutHistoryPlots(h);
+  const tables = buildHistoryTables(h);
   const projection = h.anodes.projection;
   const recurring = h.findings.filter((f) => f.recurring);
 
@@ -67,8 +67,7 @@ export default async function TankHistoryPage({ params }: { params: Promise<{ ve
           id="coating"
           title="Coating breakdown per area"
           chart={plots.coating}
-          head={["Area", ...dates]}
-          rows={h.coating.map((s) => [s.label, ...dates.map((d) => { const p = s.points.find((x) => x.date === d); return p ? `${fmt(p.breakdownPct)} %` : "—"; })])}
+          table={tables.coating}
         />
         <HistoryPlot
           id="anodes"
@@ -83,15 +82,13 @@ export default async function TankHistoryPage({ params }: { params: Promise<{ ve
               <p>No projection: it needs two signed inspections on different dates with growing wastage.</p>
             )
           }
-          head={["Date", "Mean wastage", "Anodes to renew"]}
-          rows={h.anodes.points.map((p) => [p.date, `${fmt(p.meanWastagePct)} %`, p.toRenewCount])}
+          table={tables.anodes}
         />
         <HistoryPlot
           id="sediment"
           title="Sediment volume"
           chart={plots.sediment}
-          head={["Date", "Volume", "Zones"]}
-          rows={h.sediment.map((p) => [p.date, `${fmt(p.volumeM3, 2)} m³`, p.zones])}
+          table={tables.sediment}
         />
 
         <section aria-labelledby="recurring" className="rounded-lg border border-slate-200 bg-white p-4">
