@@ -7,6 +7,7 @@ import type { ReactNode } from "react";
 import { Document, Image, Page, StyleSheet, Text, View } from "@react-pdf/renderer";
 import type { TKeyValue, TReportData, TReportPhoto, TReportSignature } from "@/lib/report/types";
 import { PDF_FONT_FAMILY } from "./fonts";
+import { RatingSwatchPdf } from "./parts/rating-swatch-pdf";
 import { RichTextPdf } from "./parts/rich-text-pdf";
 import { TankDiagramPdf } from "./parts/tank-diagram-pdf";
 
@@ -40,6 +41,7 @@ const s = StyleSheet.create({
   td: { paddingVertical: 2.5, paddingHorizontal: 3, fontSize: 7.5 },
   total: { flexDirection: "row", justifyContent: "flex-end", marginTop: 3, fontWeight: 700 },
   rating: { fontWeight: 700 },
+  ratingCell: { flexDirection: "row", alignItems: "center", gap: 3 },
   diagrams: { flexDirection: "row", alignItems: "flex-start", marginTop: 4 },
   photoGrid: { flexDirection: "row", flexWrap: "wrap", justifyContent: "space-between" },
   photoCell: { marginBottom: 10 },
@@ -56,9 +58,10 @@ const s = StyleSheet.create({
 /** The bytes as a Buffer without copying them; React-PDF reads a Buffer source as it is (no cache key made from it). */
 const bytes = (b: Uint8Array) => (Buffer.isBuffer(b) ? b : Buffer.from(b.buffer, b.byteOffset, b.byteLength));
 
-type TColumn<T> = { title: string; width: number | "flex"; cell: (row: T) => ReactNode };
+// `box`: the cell holds a View (a drawing beside its text), which a Text cannot hold.
+type TColumn<T> = { title: string; width: number | "flex"; cell: (row: T) => ReactNode; box?: boolean };
 
-// One Text per cell, styles made once per column: long tables are most of the layout work.
+// One Text per cell (a View where the column says `box`), styles made once per column: long tables are most of the layout work.
 function Table<T>({ columns, rows, rowKey }: { columns: TColumn<T>[]; rows: T[]; rowKey: (row: T, i: number) => string }) {
   const styles = columns.map((c) => ({ ...s.td, ...(c.width === "flex" ? { flex: 1 } : { width: c.width }) }));
   return (
@@ -68,7 +71,7 @@ function Table<T>({ columns, rows, rowKey }: { columns: TColumn<T>[]; rows: T[];
       </View>
       {rows.map((r, i) => (
         <View key={rowKey(r, i)} style={s.tr} wrap={false}>
-          {columns.map((c, j) => <Text key={c.title} style={styles[j]}>{c.cell(r)}</Text>)}
+          {columns.map((c, j) => (c.box ? <View key={c.title} style={styles[j]}>{c.cell(r)}</View> : <Text key={c.title} style={styles[j]}>{c.cell(r)}</Text>))}
         </View>
       ))}
     </View>
@@ -259,7 +262,7 @@ export function ReportDocument({ data }: { data: TReportData }) {
                 { title: "Hard scale", width: 44, cell: (c) => c.hardScale },
                 { title: "Edges", width: 36, cell: (c) => c.edges },
                 { title: "Rust grade", width: 40, cell: (c) => c.rustGrade },
-                { title: "Rating", width: 40, cell: (c) => <Text style={[s.rating, { color: RATING_COLOURS[c.rating] }]}>{c.rating}</Text> },
+                { title: "Rating", width: 44, box: true, cell: (c) => <View style={s.ratingCell}><RatingSwatchPdf rating={c.rating} /><Text style={[s.rating, { color: RATING_COLOURS[c.rating] }]}>{c.rating}</Text></View> },
                 { title: "Decided by", width: "flex", cell: (c) => c.decidedBy },
               ]}
             />

@@ -1,7 +1,7 @@
 import Link from "next/link";
 import type { TFleetCounts } from "@/db/queries/fleet";
 import type { TFleetRatingFilter } from "@/lib/schemas/fleet";
-import { RatingSwatch } from "./rating-mark";
+import { RatingSwatch } from "@/components/ui/rating-mark";
 
 /** note: what else the count includes, part of the label. */
 type TCount = { label: string; note?: string; value: number; href?: string; swatch?: "GOOD" | "FAIR" | "POOR" | "never" };

@@ -1,7 +1,7 @@
 import Link from "next/link";
 import { Cell, Table } from "@/components/ui/table";
 import type { TFleetTank } from "@/lib/services/fleet";
-import { RatingMark } from "./rating-mark";
+import { RatingMark } from "@/components/ui/rating-mark";
 
 const pct = (v: number) => `${Number.isInteger(v) ? v : v.toFixed(1)}\u00a0%`;
 

@@ -1,12 +1,12 @@
 "use client";
 
+import { RatingMark } from "@/components/ui/rating-mark";
 import { Cell, Table } from "@/components/ui/table";
 import { rateCoatingArea, rateTank } from "@/lib/calc/coating";
 import { astmD610Grade } from "@/lib/calc/rust-grade";
 import { ZCoatingAreaInput, ZCoatingInput } from "@/lib/schemas/inspection";
 import { COATING_AREA_LABELS, COATING_AREAS, type TCoatingArea } from "@/lib/vocabulary";
 import { PartStatus } from "./inputs";
-import { RatingBadge } from "./rating-badge";
 import { partUrl, type TView } from "./types";
 import { usePart } from "./use-part";
 
@@ -62,7 +62,7 @@ export function CoatingStep({ view }: { view: TView }) {
         Give each area as percentages, never as a word. Rated by breakdown (or rusted area), hard scale and, where given, edges and welds rusted; the tank takes its worst area.
         At exactly 20 % breakdown this company rates {view.twentyPercentRule === "table" ? "FAIR (table of definitions)" : "POOR (\"20 % or more\")"}.
       </p>
-      {tank ? <p className="text-base">Tank: <RatingBadge rating={tank.rating} /> — worst area {COATING_AREA_LABELS[tank.worst.area]}: {tank.worst.rating.decidedBy}.</p> : null}
+      {tank ? <p className="text-base">Tank: <RatingMark kind={tank.rating} /> — worst area {COATING_AREA_LABELS[tank.worst.area]}: {tank.worst.rating.decidedBy}.</p> : null}
       <Table head={["Area", "Breakdown %", "Rusted %", "Hard scale %", "Edges/welds rusted %", "Where", "Rating", "Rust grade"]} caption="Coating condition per area">
         {COATING_AREAS.map((a) => {
           const r = rated.find((x) => x.area === a);
@@ -74,7 +74,7 @@ export function CoatingStep({ view }: { view: TView }) {
               <Cell>{input(a, "hardScalePct", "hard scale %")}</Cell>
               <Cell>{input(a, "edgesRustedPct", "edges and welds rusted %")}</Cell>
               <Cell>{input(a, "location", "where", true)}</Cell>
-              <Cell>{r ? <><RatingBadge rating={r.rating.rating} /><span className="block text-xs text-slate-600">{r.rating.decidedBy}</span></> : <span className="text-xs text-slate-500">no percentage yet</span>}</Cell>
+              <Cell>{r ? <><RatingMark kind={r.rating.rating} /><span className="block text-xs text-slate-600">{r.rating.decidedBy}</span></> : <span className="text-xs text-slate-500">no percentage yet</span>}</Cell>
               <Cell>{r ? `ASTM D610 grade ${astmD610Grade(r.rusted)}` : "—"}</Cell>
             </tr>
           );

@@ -2,10 +2,10 @@
 
 import { SignForm } from "@/components/signing/sign-form";
 import { Notice } from "@/components/ui/notice";
+import { RatingMark } from "@/components/ui/rating-mark";
 import { roundKg } from "@/lib/calc/steel";
 import { formatFrames } from "@/lib/structure/frames";
 import { COATING_AREA_LABELS, FINDING_TYPE_LABELS, MEMBER_KIND_LABELS, NOT_INSPECTED_REASON_LABELS, PHOTO_KIND_LABELS, REPAIR_KIND_LABELS } from "@/lib/vocabulary";
-import { RatingBadge } from "./rating-badge";
 import { useSync } from "./sync";
 import type { TView } from "./types";
 
@@ -29,7 +29,7 @@ export function ReviewStep({ view, go, signerName }: { view: TView; go: (step: s
       )}
       {view.editable && !view.blockers.length && signerName !== undefined ? <SubmitWhenSaved view={view} signerName={signerName} /> : null}
       <section className="grid gap-3 rounded-lg border border-slate-200 bg-white p-4 sm:grid-cols-2">
-        <p>Coating: {view.tankRating ? <><RatingBadge rating={view.tankRating.rating} /> — worst area {COATING_AREA_LABELS[view.tankRating.worstArea as keyof typeof COATING_AREA_LABELS]}: {view.tankRating.decidedBy}</> : "not rated yet"}</p>
+        <p>Coating: {view.tankRating ? <><RatingMark kind={view.tankRating.rating} /> — worst area {COATING_AREA_LABELS[view.tankRating.worstArea as keyof typeof COATING_AREA_LABELS]}: {view.tankRating.decidedBy}</> : "not rated yet"}</p>
         <p>Findings: {view.findings.length} · steel {roundKg(steel)} kg ({(steel / 1000).toFixed(3)} t) · coating repair {coatingRepair.toFixed(2)} m²</p>
         <p>Anodes: {view.anodes ? `${view.anodes.meanWastagePct} % mean wastage, ${view.anodes.toRenewCount} to renew` : "not recorded"}</p>
         <p>Sediment: {view.sediment.totalM3.toFixed(2)} m³{view.sediment.cost ? ` · about ${view.sediment.cost.amount.toLocaleString("en")} ${view.sediment.cost.currency} to remove` : ""}</p>

@@ -24,9 +24,8 @@ export function reportCss({ running, footer }: { running: string; footer: string
 .tw-report .note { color: #475569; }
 .tw-report .stop { color: #b91c1c; font-weight: 700; }
 .tw-report .warning, .tw-report .blockers { border: 1px solid #b45309; background: #fffbeb; padding: 8px; margin-top: 8px; }
-.tw-report .rating-GOOD { color: #166534; font-weight: 700; }
-.tw-report .rating-FAIR { color: #a16207; font-weight: 700; }
-.tw-report .rating-POOR { color: #b91c1c; font-weight: 700; }
+.tw-report [data-rating] { display: inline-flex; align-items: center; gap: 6px; white-space: nowrap; font-weight: 700; }
+.tw-report [data-swatch] { display: inline-block; flex-shrink: 0; color: #1e293b; }
 .tw-report .diagrams { display: grid; grid-template-columns: minmax(0, 300px) 1fr; gap: 12px; align-items: start; }
 .tw-report .diagrams .profile { grid-column: 1 / -1; }
 .tw-report .remarks p { margin: 0 0 6px; }

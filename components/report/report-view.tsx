@@ -2,6 +2,7 @@
 // as the PDF (templates/report.tsx), laid out for a screen and for printing.
 import type { ReactNode } from "react";
 import { TankDiagramSvg } from "@/components/structure-map/tank-diagram-svg";
+import { RatingMark } from "@/components/ui/rating-mark";
 import type { TReportData } from "@/lib/report/types";
 import { KeyValues } from "./key-values";
 import { reportCss } from "./report-styles";
@@ -84,7 +85,7 @@ export function ReportView({ data, toolbar }: { data: TReportData; toolbar?: Rea
           head={["Area", "Breakdown", "Rusted", "Hard scale", "Edges", "Rust grade", "Rating", "Decided by"]}
           rows={data.coating}
           rowKey={(c) => c.area}
-          cells={(c) => [c.area, c.breakdown, c.rusted, c.hardScale, c.edges, c.rustGrade, <span key="r" className={`rating-${c.rating}`}>{c.rating}</span>, c.decidedBy]}
+          cells={(c) => [c.area, c.breakdown, c.rusted, c.hardScale, c.edges, c.rustGrade, <RatingMark key="r" kind={c.rating} />, c.decidedBy]}
         />
       ) : <p className="note">No coating areas recorded.</p>}
       <p className="note">{data.coatingNote}</p>

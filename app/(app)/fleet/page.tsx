@@ -4,7 +4,7 @@ import { FleetFilters } from "@/components/fleet/fleet-filters";
 import { Pager } from "@/components/ui/pager";
 import { FleetTankTable } from "@/components/fleet/fleet-tank-table";
 import { IntervalSettings } from "@/components/fleet/interval-settings";
-import { RatingMark } from "@/components/fleet/rating-mark";
+import { RatingMark } from "@/components/ui/rating-mark";
 import { VesselTable } from "@/components/fleet/vessel-table";
 import { Notice } from "@/components/ui/notice";
 import { PageHeader } from "@/components/ui/page-header";

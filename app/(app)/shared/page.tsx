@@ -1,5 +1,5 @@
 import type { Metadata } from "next";
-import { RatingMark } from "@/components/fleet/rating-mark";
+import { RatingMark } from "@/components/ui/rating-mark";
 import { AcknowledgeForm } from "@/components/signing/acknowledge-form";
 import { Notice } from "@/components/ui/notice";
 import { PageHeader } from "@/components/ui/page-header";
