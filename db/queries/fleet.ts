@@ -42,11 +42,11 @@ function dueWithinWhere(days: number, today: string): SQL {
 
 /** Tie-breaks shared by both orders: vessel, the structure map's order, code, id. */
 const VESSEL_ORDER = sql`vessel_name, vessel_id, sort_order, code, tank_id`;
-const ORDER_BY: Record<TFleetSort, SQL> = {
-  vessel: VESSEL_ORDER,
-  // Most urgent first: no due date (never inspected, no interval) is due now, then the oldest due date.
-  due: sql`due_on asc nulls first, ${VESSEL_ORDER}`,
-};
+const orderBy = (sort: TFleetSort, today: string): SQL =>
+  sort === "vessel"
+    ? VESSEL_ORDER
+    : // Most urgent first: overdue (oldest due date first), then due now (never inspected, no interval: due today), then the soonest.
+      sql`coalesce(due_on, ${today}::date) asc, due_on is null, ${VESSEL_ORDER}`;
 
 /** `with … dated`: one row per tank in scope. Every table is read with the company in its where. */
 function datedTanks(scope: TFleetScope): SQL {
@@ -120,7 +120,7 @@ export async function listFleetTanks({ scope, filters, sort = "vessel", limit, o
            default_months, below_good_months, intervals_vessel_own, rating_rank, to_char(due_on, 'YYYY-MM-DD') as due_on
     from dated
     where ${filterWhere(filters, scope.today)}
-    order by ${ORDER_BY[sort]}
+    order by ${orderBy(sort, scope.today)}
     limit ${limit} offset ${offset}`);
   return res.rows.map((r) => ({
     tankId: String(r.tank_id),

@@ -13,7 +13,7 @@ export const FLEET_RATING_FILTER_LABELS: Record<TFleetRatingFilter, string> = {
   unrated: "Inspected, coating not rated",
   never: "Never inspected",
 };
-/** vessel: by vessel, then the structure map's order; due: the most urgent first (never inspected or no interval, then the oldest due date). */
+/** vessel: by vessel, then the structure map's order; due: the most urgent first (overdue, oldest due date first; then due now: never inspected or no interval; then the soonest). */
 export const FLEET_SORTS = ["vessel", "due"] as const;
 export type TFleetSort = (typeof FLEET_SORTS)[number];
 export const FLEET_SORT_LABELS: Record<TFleetSort, string> = {

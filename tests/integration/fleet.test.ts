@@ -188,12 +188,12 @@ describe("filters and paging", () => {
     expect(sib.counts).toMatchObject({ tanks: 4, fair: 1, good: 2, neverInspected: 1, matching: 1 });
   });
 
-  it("sort=due: due now (never inspected) first, then overdue oldest first, then the soonest; by vessel on a tie", async () => {
-    // By hand (today 2026-03-10): the two never inspected (no due date: "Own vessel" before "Sibling vessel"),
-    // FT-B and FT-S2 both 2026-02-28 (own vessel first), FT-S3 2026-03-20, FT-S1 2026-06-30,
-    // FT-D 2026-07-10, FT-C 2026-08-15, FT-A 2027-01-31.
+  it("sort=due: overdue oldest first, then due now (never inspected), then the soonest; by vessel on a tie", async () => {
+    // By hand (today 2026-03-10): FT-B and FT-S2 both overdue since 2026-02-28 (own vessel first), then the two
+    // never inspected (no due date, due today: "Own vessel" before "Sibling vessel"), FT-S3 2026-03-20,
+    // FT-S1 2026-06-30, FT-D 2026-07-10, FT-C 2026-08-15, FT-A 2027-01-31.
     const inOrder = (o: TFleetOverview) => o.tanks.map((t) => `${t.vesselId === s.ownVessel.id ? "own" : "sib"} ${t.code}`);
-    const expected = ["own No. 1 WBT P", "sib No. 1 WBT P", `own ${codes.fair}`, `sib ${codes.sFair}`, `sib ${codes.sSoon}`, `sib ${codes.sGood}`, `own ${codes.unrated}`, `own ${codes.poor}`, `own ${codes.good}`];
+    const expected = [`own ${codes.fair}`, `sib ${codes.sFair}`, "own No. 1 WBT P", "sib No. 1 WBT P", `sib ${codes.sSoon}`, `sib ${codes.sGood}`, `own ${codes.unrated}`, `own ${codes.poor}`, `own ${codes.good}`];
     expect(inOrder(await getFleetOverviewAs(actor, query({ sort: "due" }), TODAY))).toEqual(expected);
     // Sorted in SQL before LIMIT/OFFSET: page 2 of 4 holds the 5th to 8th of that order.
     const page2 = await getFleetOverviewAs(actor, query({ sort: "due", pageSize: "4", page: "2" }), TODAY);
