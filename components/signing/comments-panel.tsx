@@ -5,7 +5,11 @@ import { Button } from "@/components/ui/button";
 import { Notice } from "@/components/ui/notice";
 import { postJson } from "./api";
 
-const COMMENT_ADDED = "Comment added; the vessel's officers and master are told by e-mail.";
+/** What the office is told after adding a comment: who was told by e-mail, or that nobody was. */
+const commentAdded = (notified: number) =>
+  notified > 0
+    ? `Comment added; ${notified === 1 ? "1 person" : `${notified} people`} on the vessel (officers and master) told by e-mail.`
+    : "Comment added; no e-mail went to the vessel (no officer or master with an address, or the mail could not be sent): it shows on the report.";
 
 type TComment = { id: string; kind: string; body: string; createdAt: string; findingNumber: number | null; authorName: string; authorRank: string | null };
 
@@ -24,11 +28,11 @@ export function CommentsPanel({ inspectionId, findings }: { inspectionId: string
 
   async function send(e: React.FormEvent) {
     e.preventDefault();
-    const res = await postJson(`/api/v1/inspections/${inspectionId}/comments`, { body, findingId });
+    const res = await postJson<{ notified: number }>(`/api/v1/inspections/${inspectionId}/comments`, { body, findingId });
     if (res.ok) {
       setBody("");
       setFindingId("");
-      setResult({ tone: "success", text: COMMENT_ADDED });
+      setResult({ tone: "success", text: commentAdded(res.body.notified) });
       await load();
     } else setResult({ tone: "error", text: res.message });
   }

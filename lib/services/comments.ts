@@ -29,13 +29,19 @@ export async function addCommentAs(actor: TActor, inspectionId: string, body: un
   const row = await q.insertComment({ orgId: auth.orgId, inspectionId, authorId: actor.userId, body: input.body, findingId: finding?.id ?? null });
   const ins = (await getInspectionSummary({ orgId: auth.orgId, inspectionId }))!;
   const crew = await q.listVesselCrewEmails({ orgId: auth.orgId, vesselId: auth.vessel.id });
+  let notified = 0;
   if (crew.length) {
     const mail = commentNoticeEmail({
       author: `${actor.name}${actor.rank ? `, ${actor.rank}` : ""}`, vesselName: ins.vesselName, tankCode: ins.tankCode, inspectedOn: ins.inspectedOn,
       findingNumber: finding?.number ?? null, body: input.body, url: `${serverEnv().APP_URL}/inspections/${inspectionId}?step=review`,
     });
     // The comment stands even if the notice cannot be sent.
-    await sendMail({ to: crew, ...mail }).catch((error) => console.error("[tankwright] comment notice e-mail failed", error));
+    const sent = await sendMail({ to: crew, ...mail }).then(
+      () => true,
+      (error) => (console.error("[tankwright] comment notice e-mail failed", error), false),
+    );
+    if (sent) notified = crew.length;
   }
-  return { id: row.id, createdAt: row.createdAt };
+  // How many of the vessel's officers and master were told by e-mail (0: nobody has an address, or the mail failed).
+  return { id: row.id, createdAt: row.createdAt, notified };
 }

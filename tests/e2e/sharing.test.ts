@@ -48,7 +48,7 @@ describe("sharing with class in Chromium", () => {
     await comment.getByRole("button", { name: /Add the comment/ }).click();
     await office.getByTestId("comment").filter({ hasText: "docking's coating work" }).waitFor();
     // The office is told the comment went in, and the box is empty for the next one.
-    await comment.getByRole("status").filter({ hasText: "Comment added; the vessel's officers and master are told by e-mail." }).waitFor();
+    await comment.getByRole("status").filter({ hasText: "Comment added; 2 people on the vessel (officers and master) told by e-mail." }).waitFor();
     await expect(comment.getByLabel("Comment").inputValue()).resolves.toBe("");
 
     const surveyor = await signedInTabletPage(browser, baseUrl, s.users.surveyor.email, PASSWORD);

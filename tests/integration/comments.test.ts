@@ -31,6 +31,8 @@ describe("comments from the office", () => {
     const version = (await testDb().query.inspections.findFirst({ where: eq(inspections.id, inspectionId) }))!.version;
     const res = await superintendent.request(`/api/v1/inspections/${inspectionId}/comments`, { method: "POST", json: { body: "Price this touch-up with the next docking's coating work.", findingId: second!.id } });
     expect(res.status).toBe(201);
+    // The scenario's vessel has one officer and one master with addresses: two people told.
+    expect(((await res.json()) as { notified: number }).notified).toBe(2);
     // The signed report itself is unchanged.
     expect((await testDb().query.inspections.findFirst({ where: eq(inspections.id, inspectionId) }))!.version).toBe(version);
     for (const reader of [officer, master]) {
