@@ -128,6 +128,34 @@ export async function sumDockingItems(scope: TDockingScope) {
   }));
 }
 
+/**
+ * The sums of sumDockingItems for every docking of a vessel at once, grouped
+ * by docking and kind (one query for the list of a vessel's dockings).
+ */
+export async function sumItemsOfVesselDockings(scope: TVesselScope) {
+  const res = await db().execute<{ docking_id: string; kind: string; quantity: string | null; cost: string | null; included: number; excluded: number; adjusted: number }>(sql`
+    select i.docking_id,
+           i.kind,
+           sum(coalesce(i.adjusted_quantity, i.quantity)) filter (where i.included) as quantity,
+           sum(coalesce(i.adjusted_quantity, i.quantity) * i.unit_rate) filter (where i.included) as cost,
+           count(*) filter (where i.included)::int as included,
+           count(*) filter (where not i.included)::int as excluded,
+           count(*) filter (where i.adjusted_quantity is not null)::int as adjusted
+    from docking_items i
+    join dockings d on d.org_id = i.org_id and d.id = i.docking_id
+    where i.org_id = ${scope.orgId}::uuid and d.vessel_id = ${scope.vesselId}::uuid
+    group by i.docking_id, i.kind`);
+  return res.rows.map((r) => ({
+    dockingId: r.docking_id,
+    kind: r.kind,
+    quantity: r.quantity === null ? 0 : Number(r.quantity),
+    cost: r.cost === null ? 0 : Number(r.cost),
+    included: Number(r.included),
+    excluded: Number(r.excluded),
+    adjusted: Number(r.adjusted),
+  }));
+}
+
 /** How far the yard's work has got: the included items, and how many of them are marked done. */
 export async function countDoneItems(scope: TDockingScope) {
   const [row] = await db()
@@ -274,6 +302,31 @@ export async function rebuildDocking(v: TDockingScope & { actorUserId: string; g
 }
 
 const isLocked = (status: TDockingStatus) => status === "completed" || status === "cancelled";
+
+/** The details a docking is planned with, as PUT /api/v1/dockings/{id} replaces them. */
+const DETAIL_FIELDS = ["yard", "place", "plannedOn", "currency", "steelRatePerKg", "coatingRatePerM2", "anodeRatePerPiece", "sedimentRatePerM3"] as const satisfies readonly (keyof TDockingInput)[];
+
+/**
+ * Replaces the docking's details (yard, place, planned date, currency, unit
+ * rates) while it is planned or in progress, with an audit row holding the
+ * before and after of each changed field. Returns "locked" for a completed or
+ * cancelled docking (nothing is written), null for no such docking; nothing
+ * is written when no field changes.
+ */
+export async function updateDocking(v: TDockingScope & { actorUserId: string; input: TDockingInput }) {
+  return db().transaction(async (tx) => {
+    const docking = await lockDocking(tx, v);
+    if (!docking) return null;
+    if (isLocked(docking.status)) return { locked: docking.status } as const;
+    const changed = DETAIL_FIELDS.filter((f) => docking[f] !== v.input[f]);
+    if (!changed.length) return { changed } as const;
+    const before = Object.fromEntries(changed.map((f) => [f, docking[f]]));
+    const after = Object.fromEntries(changed.map((f) => [f, v.input[f]]));
+    await tx.update(dockings).set({ ...after, updatedAt: new Date() }).where(and(eq(dockings.orgId, v.orgId), eq(dockings.id, v.dockingId)));
+    await writeAudit(tx, { orgId: v.orgId, actorUserId: v.actorUserId, action: "docking.update", entity: "docking", entityId: v.dockingId, detail: { before, after } });
+    return { changed } as const;
+  });
+}
 
 /**
  * Adds a hand-added ("other") item to the docking, audit-logged. Returns

@@ -243,7 +243,16 @@ export const ZDockingRecord = z.strictObject({
 /** GET /api/v1/vessels/{vesselId}/dockings */
 export const ZDockingList = z.strictObject({
   vessel: z.strictObject({ id: ZId, name: z.string() }),
-  dockings: z.array(ZDockingRecord).describe("Latest planned first."),
+  dockings: z
+    .array(
+      z.strictObject({
+        ...ZDockingRecord.shape,
+        minorUnits: z.number().int().min(0).describe("Digits after the decimal point of the currency."),
+        grandTotal: z.number().describe("Over every included item, in the docking's currency; rounded once, as in the docking's work list."),
+        counts: z.strictObject({ included: ZCount, excluded: ZCount, adjusted: ZCount }).describe("Over every item."),
+      }),
+    )
+    .describe("Latest planned first."),
 });
 
 const ZKindTotal = z.strictObject({

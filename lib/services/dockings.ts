@@ -55,9 +55,29 @@ const gather = (sources: TWorkSource[]) => gatherWorkItems(sources).items;
 const lockedError = (status: string) =>
   new AppError("conflict", `This docking is ${status}: its work list can no longer be changed.`, [{ path: "status", message: `the docking is ${status}` }]);
 
+/** Per-kind sums from the database, in the shape priceKindSums reads, with the count of adjusted items. */
+function kindSumsOf(sums: readonly { kind: string; quantity: number; cost: number; included: number; excluded: number; adjusted: number }[]) {
+  const byKind = emptyKindSums();
+  let adjusted = 0;
+  for (const s of sums) {
+    if (isGatheredKind(s.kind)) byKind[s.kind] = { quantity: s.quantity, included: s.included, excluded: s.excluded };
+    else if (s.kind === "other") byKind.other = { cost: s.cost, included: s.included, excluded: s.excluded };
+    else continue;
+    adjusted += s.adjusted;
+  }
+  return { byKind, adjusted };
+}
+
+/** The vessel's dockings, latest planned first, each with its grand total (in its currency) and item counts from the database's sums. */
 export async function listDockingsAs(actor: TActor, vesselId: string) {
   const { orgId, vessel } = await authorizeVessel({ actor, vesselId, allow: DOCKING_PLANNERS });
-  return { vessel: { id: vessel.id, name: vessel.name }, dockings: await q.listDockings({ orgId, vesselId }) };
+  const [rows, sums] = await Promise.all([q.listDockings({ orgId, vesselId }), q.sumItemsOfVesselDockings({ orgId, vesselId })]);
+  const dockings = rows.map((d) => {
+    const { byKind, adjusted } = kindSumsOf(sums.filter((s) => s.dockingId === d.id));
+    const { minorUnits, grandTotal, counts } = priceKindSums(byKind, d, adjusted);
+    return { ...d, minorUnits, grandTotal, counts };
+  });
+  return { vessel: { id: vessel.id, name: vessel.name }, dockings };
 }
 
 export async function createDockingAs(actor: TActor, vesselId: string, body: unknown) {
@@ -105,14 +125,7 @@ export async function getDockingAs(actor: TActor, dockingId: string, params: TVi
   if (!docking) throw new AppError("not_found", "No such docking.");
   // The totals from the database's sums; only the page's items are priced one by one.
   // Gathered kinds are priced from their summed quantity; hand-added work from its summed cost (mixed units).
-  const byKind = emptyKindSums();
-  let adjusted = 0;
-  for (const s of sums) {
-    if (isGatheredKind(s.kind)) byKind[s.kind] = { quantity: s.quantity, included: s.included, excluded: s.excluded };
-    else if (s.kind === "other") byKind.other = { cost: s.cost, included: s.included, excluded: s.excluded };
-    else continue;
-    adjusted += s.adjusted;
-  }
+  const { byKind, adjusted } = kindSumsOf(sums);
   const pageItems = page.rows.flatMap((r) => (isWorkKind(r.kind) ? [{ ...r, key: r.id, kind: r.kind }] : []));
   const candidates = await q.listOpenFindingsWithoutQuantities({ orgId, inspectionIds: sources.map((s) => s.inspectionId) });
   const unpriced = gatherWorkItems(
@@ -208,6 +221,25 @@ export async function workListCsvAs(actor: TActor, dockingId: string) {
   return { csv, fileName };
 }
 
+
+/**
+ * Changes the docking's details (yard, place, planned date, currency, unit
+ * rates; the body of creating one) while it is planned or in progress; a
+ * completed or cancelled docking is refused (409). A new currency applies to
+ * every rate, hand-added items' own rates included. Audit-logged.
+ */
+export async function updateDockingAs(actor: TActor, dockingId: string, body: unknown, params: TViewParams = FIRST_PAGE) {
+  const { orgId } = await authorizeDocking(actor, dockingId);
+  const view = viewOf(params);
+  const input = validateDockingInput(ZDockingInput, body);
+  const result = await q.updateDocking({ orgId, dockingId, actorUserId: actor.userId, input });
+  if (!result) throw new AppError("not_found", "No such docking.");
+  if (result.locked) {
+    const status = DOCKING_STATUS_LABELS[result.locked].toLowerCase();
+    throw new AppError("conflict", `This docking is ${status}: its details can no longer be changed.`, [{ path: "status", message: `the docking is ${result.locked}` }]);
+  }
+  return getDockingAs(actor, dockingId, view);
+}
 
 /** Starts, completes or cancels the docking; a completed or cancelled docking is final. */
 export async function setDockingStatusAs(actor: TActor, dockingId: string, body: unknown, params: TViewParams = FIRST_PAGE) {

@@ -312,6 +312,8 @@ const CASES: TCase[] = [
   },
   { name: "POST /api/v1/dockings/:id/rebuild", method: "POST", path: (s, sc) => `${dockingPath(s, sc)}/rebuild`, scopes: ["own", "sibling", "other"], expect: dockingPlanner(200) },
   { name: "GET /api/v1/dockings/:id/work-list.csv", path: (s, sc) => `${dockingPath(s, sc)}/work-list.csv`, scopes: ["own", "sibling", "other"], expect: dockingPlanner(200) },
+  { name: "PUT /api/v1/dockings/:id (details as they are)", method: "PUT", path: dockingPath, body: () => DOCKING_BODY, scopes: ["own", "sibling", "other"], expect: dockingPlanner(200) },
+  { name: "PUT /api/v1/dockings/:id (not-ISO currency)", method: "PUT", path: dockingPath, body: () => ({ ...DOCKING_BODY, currency: "XXQ" }), scopes: ["own", "sibling", "other"], expect: dockingPlanner(400) },
   { name: "PUT /api/v1/dockings/:id/status (unknown status)", method: "PUT", path: (s, sc) => `${dockingPath(s, sc)}/status`, body: () => ({ status: "finished" }), scopes: ["own", "sibling", "other"], expect: dockingPlanner(400) },
   {
     name: "PUT /api/v1/dockings/:id/done (planned docking)", method: "PUT", path: (s, sc) => `${dockingPath(s, sc)}/done`,

@@ -38,8 +38,8 @@ function validatorFor(method: string, path: string, status: number, mediaType = 
 }
 
 /** Calls a route, and validates its JSON body against the served document's schema for that status. */
-async function expectDocumented(client: TClient, method: "get", path: string, url: string, status: number) {
-  const res = await client.request(url);
+async function expectDocumented(client: TClient, method: "get" | "put", path: string, url: string, status: number, json?: unknown) {
+  const res = await client.request(url, method === "get" ? {} : { method: method.toUpperCase(), json });
   expect(res.status, `${url}: ${await res.clone().text()}`).toBe(status);
   expect(res.headers.get("content-type")).toContain("application/json");
   const body = (await res.json()) as TJson;
@@ -143,6 +143,10 @@ describe("the documented answers are the real ones", () => {
     expect(page.workList.counts.included).toBe(page.paging.matching);
     const tank = s.tankOf(s.ownVessel.id);
     await expectDocumented(superintendent, "get", path, `/api/v1/dockings/${dockingId}?tank=${tank.id}&page=2&pageSize=1`, 200);
+    const details = { yard: "Test Yard", place: "Test Harbour", plannedOn: "2027-04-19", currency: "USD", steelRatePerKg: 4.2, coatingRatePerM2: 40, anodeRatePerPiece: 180, sedimentRatePerM3: 95 };
+    const edited = (await expectDocumented(superintendent, "put", path, `/api/v1/dockings/${dockingId}?page=1&pageSize=2`, 200, details)) as { docking: { plannedOn: string; coatingRatePerM2: number }; workList: { items: unknown[] } };
+    expect(edited.docking).toMatchObject({ plannedOn: "2027-04-19", coatingRatePerM2: 40 });
+    expect(edited.workList.items).toHaveLength(2);
   });
 
   it("the work list files are what the document says", async () => {
