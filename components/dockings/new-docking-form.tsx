@@ -2,35 +2,19 @@
 
 import { useRouter } from "next/navigation";
 import { useState } from "react";
+import { DOCKING_RATE_FIELDS, DockingDetailsFields, EMPTY_DOCKING_DRAFT, type TDockingDraft, type TDockingDraftErrors } from "@/components/dockings/docking-details-fields";
 import { Button } from "@/components/ui/button";
-import { TextField } from "@/components/ui/field";
 import { Notice } from "@/components/ui/notice";
 import { ZDockingInput } from "@/lib/schemas/docking";
 
-type TDraft = Record<(typeof FIELDS)[number]["name"], string>;
 type TErrorBody = { error?: { message?: string; issues?: { path: string; message: string }[] } };
 
-const FIELDS = [
-  { name: "yard", label: "Yard", hint: "The repair yard's name" },
-  { name: "place", label: "Place", hint: "Port or berth" },
-  // Written as the product writes dates everywhere (2027-04-12), not in the browser's locale.
-  { name: "plannedOn", label: "Planned date", hint: "YYYY-MM-DD, e.g. 2027-04-12", placeholder: "YYYY-MM-DD" },
-  { name: "currency", label: "Currency", hint: "ISO 4217 code: USD, EUR, SGD …" },
-  { name: "steelRatePerKg", label: "Steel renewal, per kg", inputMode: "decimal" },
-  { name: "coatingRatePerM2", label: "Coating repair, per m²", inputMode: "decimal" },
-  { name: "anodeRatePerPiece", label: "Anode renewal, per piece", inputMode: "decimal" },
-  { name: "sedimentRatePerM3", label: "Sediment removal, per m³", inputMode: "decimal" },
-] as const;
-
-const EMPTY = Object.fromEntries(FIELDS.map((f) => [f.name, ""])) as TDraft;
-const RATE_FIELDS = ["steelRatePerKg", "coatingRatePerM2", "anodeRatePerPiece", "sedimentRatePerM3"] as const;
-
 /** The company's most recent docking, whose currency and rates a new docking starts from. */
-export type TRatesSource = { vesselName: string; yard: string; plannedOn: string; currency: string } & Record<(typeof RATE_FIELDS)[number], number>;
+export type TRatesSource = { vesselName: string; yard: string; plannedOn: string; currency: string } & Record<(typeof DOCKING_RATE_FIELDS)[number], number>;
 
-function startingDraft(from: TRatesSource | null): TDraft {
-  if (!from) return EMPTY;
-  return { ...EMPTY, currency: from.currency, ...(Object.fromEntries(RATE_FIELDS.map((k) => [k, String(from[k])])) as Record<(typeof RATE_FIELDS)[number], string>) };
+function startingDraft(from: TRatesSource | null): TDockingDraft {
+  if (!from) return EMPTY_DOCKING_DRAFT;
+  return { ...EMPTY_DOCKING_DRAFT, currency: from.currency, ...(Object.fromEntries(DOCKING_RATE_FIELDS.map((k) => [k, String(from[k])])) as Record<(typeof DOCKING_RATE_FIELDS)[number], string>) };
 }
 
 /**
@@ -40,8 +24,8 @@ function startingDraft(from: TRatesSource | null): TDraft {
  */
 export function NewDockingForm({ vesselId, ratesFrom }: { vesselId: string; ratesFrom: TRatesSource | null }) {
   const router = useRouter();
-  const [draft, setDraft] = useState<TDraft>(() => startingDraft(ratesFrom));
-  const [errors, setErrors] = useState<Partial<Record<keyof TDraft, string>>>({});
+  const [draft, setDraft] = useState<TDockingDraft>(() => startingDraft(ratesFrom));
+  const [errors, setErrors] = useState<TDockingDraftErrors>({});
   const [message, setMessage] = useState<string | null>(null);
   const [busy, setBusy] = useState(false);
 
@@ -80,22 +64,7 @@ export function NewDockingForm({ vesselId, ratesFrom }: { vesselId: string; rate
       ) : (
         <p className="text-sm text-slate-700" data-testid="rates-from">No earlier docking in the company: enter this yard&apos;s rates.</p>
       )}
-      <div className="grid gap-4 sm:grid-cols-2">
-        {FIELDS.map((f) => (
-          <TextField
-            key={f.name}
-            label={f.label}
-            name={f.name}
-            hint={"hint" in f ? f.hint : undefined}
-            type="text"
-            placeholder={"placeholder" in f ? f.placeholder : undefined}
-            inputMode={"inputMode" in f ? f.inputMode : undefined}
-            value={draft[f.name]}
-            error={errors[f.name]}
-            onChange={(e) => setDraft((d) => ({ ...d, [f.name]: e.target.value }))}
-          />
-        ))}
-      </div>
+      <DockingDetailsFields draft={draft} errors={errors} onChange={(name, value) => setDraft((d) => ({ ...d, [name]: value }))} />
       <Button type="submit" disabled={busy}>{busy ? "Creating…" : "Create docking and gather the work list"}</Button>
     </form>
   );

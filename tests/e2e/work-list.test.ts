@@ -85,11 +85,29 @@ describe("the docking work list in Chromium", () => {
     await workList.removeItem(/Staging in No\. 1 WBT P/);
     expect(await workList.grandTotal().textContent()).toContain("$596.35");
 
+    // The yard's quotation changes the coating rate: 3.7 m² × 40.00 = 148.00; grand total 148.00 + 180.00 + 285.00 = 613.00.
+    const details = await workList.openDetails();
+    await details.getByLabel("Coating repair, per m²", { exact: true }).fill("-40");
+    await details.getByRole("button", { name: "Save the docking's details" }).click();
+    await page.getByText("Coating repair, per m² cannot be negative").waitFor();
+    expect(await workList.grandTotal().textContent()).toContain("$596.35");
+    for (const width of [1280, 768]) {
+      await page.setViewportSize({ width, height: 900 });
+      await page.screenshot({ path: path.join(ARTIFACTS, `work-list-edit-details-${width}.png`), fullPage: true });
+    }
+    await workList.editDetails({ "Coating repair, per m²": "40" });
+    await page.getByText(/^Items 1–4 of 4/).waitFor();
+    await workList.total("coating").filter({ hasText: "$148.00" }).waitFor();
+    expect(await workList.grandTotal().textContent()).toContain("$613.00");
+    expect(await workList.sources().textContent()).toContain("coating $40.00/m²");
+
     // After the docking: the yard's work is ticked off item by item; finding 1 closes with its only item.
     await workList.startDocking();
     await workList.markDone(/Finding 1: /);
     const [finding] = await testDb().select({ status: findings.status }).from(findings).where(and(eq(findings.inspectionId, s.inspectionOf(s.ownVessel.id)), eq(findings.number, 1)));
     expect(finding!.status).toBe("closed");
+    // The vessel's dockings: 4 items included (coating × 2, anodes, sediment), the grand total as worked above.
+    expect(await workList.dockingRows(s.ownVessel.id)).toEqual([["2027-04-12", "Test Yard Shipbuilding", "Test Harbour", "In progress", "4 included", "$613.00"]]);
     await page.close();
   }, 120_000);
 });

@@ -83,6 +83,31 @@ export class WorkListPage {
     await this.page.getByText("Removed; the totals are priced again.").waitFor();
   }
 
+  /** The "Edit the docking's details" disclosure, opened. */
+  async openDetails() {
+    const details = this.page.getByTestId("edit-docking");
+    if ((await details.getAttribute("open")) === null) await details.locator("summary").click();
+    return details.getByRole("form", { name: "The docking's details" });
+  }
+
+  /** Changes the docking's details (field label → value) and waits until the page shows the list priced again. */
+  async editDetails(fields: Record<string, string>) {
+    const form = await this.openDetails();
+    for (const [label, value] of Object.entries(fields)) await form.getByLabel(label, { exact: true }).fill(value);
+    await form.getByRole("button", { name: "Save the docking's details" }).click();
+    await this.page.getByText("Saved; the work list is priced at these rates.").waitFor();
+  }
+
+  /** The vessel's dockings: each row's cells (planned, yard, place, status, items, grand total). */
+  async dockingRows(vesselId: string) {
+    await this.page.goto(`${this.baseUrl}/vessels/${vesselId}/dockings`);
+    const rows = this.page.getByTestId("docking-row");
+    await rows.first().waitFor();
+    const out: string[][] = [];
+    for (let n = 0; n < (await rows.count()); n += 1) out.push(await this.cellTexts(rows.nth(n)));
+    return out;
+  }
+
   async startDocking() {
     await this.page.getByRole("button", { name: "Start the docking" }).click();
     await this.page.getByRole("button", { name: "Complete the docking" }).waitFor();

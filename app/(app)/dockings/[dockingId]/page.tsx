@@ -1,6 +1,7 @@
 import type { Metadata } from "next";
 import Link from "next/link";
 import { DockingStatusActions } from "@/components/dockings/docking-status-actions";
+import { EditDockingForm } from "@/components/dockings/edit-docking-form";
 import { WorkListEditor } from "@/components/dockings/work-list-editor";
 import { Notice } from "@/components/ui/notice";
 import { PageHeader } from "@/components/ui/page-header";
@@ -34,6 +35,8 @@ export default async function WorkListPage({ params, searchParams }: { params: P
   };
   const viewQuery = hrefFor(paging.page).split("?")[1] ?? "";
   const rate = (n: number) => formatMoney(n, docking.currency, { rate: true });
+  // The editor keeps the list it was given: new rates (saved above it) give it the list priced again.
+  const ratesKey = [docking.currency, docking.steelRatePerKg, docking.coatingRatePerM2, docking.anodeRatePerPiece, docking.sedimentRatePerM3].join(":");
   const locked = docking.status === "completed" || docking.status === "cancelled";
   const progress = docking.status === "in_progress" ? await readDockingProgressAs(actor, docking.id) : null;
   return (
@@ -53,6 +56,19 @@ export default async function WorkListPage({ params, searchParams }: { params: P
           Gathered from {sources.length ? sources.map((s) => `${s.tankCode} (${s.inspectedOn})`).join(", ") : "no countersigned report yet"}. Rates: steel {rate(docking.steelRatePerKg)}/kg, coating {rate(docking.coatingRatePerM2)}/m², anodes {rate(docking.anodeRatePerPiece)}/piece, sediment {rate(docking.sedimentRatePerM3)}/m³.
         </p>
         <DockingStatusActions dockingId={docking.id} status={docking.status} />
+        {locked ? null : (
+          <details className="rounded-lg border border-slate-200 bg-white p-4 text-sm" data-testid="edit-docking">
+            <summary className="cursor-pointer font-semibold text-slate-800">Edit the docking&apos;s details</summary>
+            <EditDockingForm
+              dockingId={docking.id}
+              viewQuery={viewQuery}
+              docking={{
+                yard: docking.yard, place: docking.place, plannedOn: docking.plannedOn, currency: docking.currency,
+                steelRatePerKg: docking.steelRatePerKg, coatingRatePerM2: docking.coatingRatePerM2, anodeRatePerPiece: docking.anodeRatePerPiece, sedimentRatePerM3: docking.sedimentRatePerM3,
+              }}
+            />
+          </details>
+        )}
         <form method="get" action={`/dockings/${docking.id}`} className="flex flex-wrap items-end gap-2 text-sm" aria-label="Show the items of one tank">
           <label className="text-sm">
             Tank
@@ -67,7 +83,7 @@ export default async function WorkListPage({ params, searchParams }: { params: P
         </form>
         <Pager noun="Items" page={paging.page} totalPages={paging.totalPages} matching={paging.matching} pageSize={paging.pageSize} hrefFor={(page) => hrefFor(page)} />
         <WorkListEditor
-          key={`${docking.status}:${viewQuery}`}
+          key={`${docking.status}:${viewQuery}:${ratesKey}`}
           dockingId={docking.id}
           viewQuery={viewQuery}
           itemsNote={paging.tank ? `Items of ${sources.find((s) => s.tankId === paging.tank)?.tankCode ?? "one tank"}; the totals below cover the whole list (${workList.counts.included + workList.counts.excluded} items).` : null}
