@@ -3,7 +3,7 @@ import { and, asc, desc, eq, inArray, ne, sql } from "drizzle-orm";
 import { db } from "@/db";
 import { anodeRecords, dockingItems, dockings, findings, sedimentZones, tankLatestInspections, tanks, users, vessels } from "@/db/schema";
 import type { TWriter } from "@/db/seed/builders";
-import type { TWorkItem, TWorkSource } from "@/lib/office/work-list";
+import { dockingIsFinal, type TWorkItem, type TWorkSource } from "@/lib/office/work-list";
 import type { TDockingInput, TDockingOtherItemInput } from "@/lib/schemas/docking";
 import type { TDockingStatus } from "@/lib/vocabulary";
 import { writeAudit } from "./audit";
@@ -102,48 +102,25 @@ export async function listDockingItemsPage(scope: TDockingScope & { tankId?: str
 }
 
 /**
- * Per kind, over included items: the quantity priced (the adjusted one where
- * there is one) summed, and the exact cost of items priced at their own rate
- * (hand-added work: Σ quantity priced × unit_rate, in numeric, unrounded);
- * and the item counts.
+ * Per docking and kind: the quantity priced (the adjusted one where there is
+ * one) summed over included items, the cost of hand-added work (quantity
+ * priced × its own rate), and the item counts (included, excluded, adjusted,
+ * included and done). One docking, or every docking of a vessel at once.
  */
-export async function sumDockingItems(scope: TDockingScope) {
-  const res = await db().execute<{ kind: string; quantity: string | null; cost: string | null; included: number; excluded: number; adjusted: number }>(sql`
-    select kind,
-           sum(coalesce(adjusted_quantity, quantity)) filter (where included) as quantity,
-           sum(coalesce(adjusted_quantity, quantity) * unit_rate) filter (where included) as cost,
-           count(*) filter (where included)::int as included,
-           count(*) filter (where not included)::int as excluded,
-           count(*) filter (where adjusted_quantity is not null)::int as adjusted
-    from docking_items
-    where org_id = ${scope.orgId}::uuid and docking_id = ${scope.dockingId}::uuid
-    group by kind`);
-  return res.rows.map((r) => ({
-    kind: r.kind,
-    quantity: r.quantity === null ? 0 : Number(r.quantity),
-    cost: r.cost === null ? 0 : Number(r.cost),
-    included: Number(r.included),
-    excluded: Number(r.excluded),
-    adjusted: Number(r.adjusted),
-  }));
-}
-
-/**
- * The sums of sumDockingItems for every docking of a vessel at once, grouped
- * by docking and kind (one query for the list of a vessel's dockings).
- */
-export async function sumItemsOfVesselDockings(scope: TVesselScope) {
-  const res = await db().execute<{ docking_id: string; kind: string; quantity: string | null; cost: string | null; included: number; excluded: number; adjusted: number }>(sql`
+export async function sumDockingItems(scope: TOrgScope & ({ dockingId: string } | { vesselId: string })) {
+  const which = "dockingId" in scope ? sql`d.id = ${scope.dockingId}::uuid` : sql`d.vessel_id = ${scope.vesselId}::uuid`;
+  const res = await db().execute<{ docking_id: string; kind: string; quantity: string | null; cost: string | null; included: number; excluded: number; adjusted: number; done: number }>(sql`
     select i.docking_id,
            i.kind,
            sum(coalesce(i.adjusted_quantity, i.quantity)) filter (where i.included) as quantity,
            sum(coalesce(i.adjusted_quantity, i.quantity) * i.unit_rate) filter (where i.included) as cost,
            count(*) filter (where i.included)::int as included,
            count(*) filter (where not i.included)::int as excluded,
-           count(*) filter (where i.adjusted_quantity is not null)::int as adjusted
+           count(*) filter (where i.adjusted_quantity is not null)::int as adjusted,
+           count(*) filter (where i.included and i.done_at is not null)::int as done
     from docking_items i
     join dockings d on d.org_id = i.org_id and d.id = i.docking_id
-    where i.org_id = ${scope.orgId}::uuid and d.vessel_id = ${scope.vesselId}::uuid
+    where i.org_id = ${scope.orgId}::uuid and ${which}
     group by i.docking_id, i.kind`);
   return res.rows.map((r) => ({
     dockingId: r.docking_id,
@@ -153,19 +130,8 @@ export async function sumItemsOfVesselDockings(scope: TVesselScope) {
     included: Number(r.included),
     excluded: Number(r.excluded),
     adjusted: Number(r.adjusted),
+    done: Number(r.done),
   }));
-}
-
-/** How far the yard's work has got: the included items, and how many of them are marked done. */
-export async function countDoneItems(scope: TDockingScope) {
-  const [row] = await db()
-    .select({
-      included: sql<number>`count(*) filter (where ${dockingItems.included})::int`,
-      done: sql<number>`count(*) filter (where ${dockingItems.included} and ${dockingItems.doneAt} is not null)::int`,
-    })
-    .from(dockingItems)
-    .where(and(eq(dockingItems.orgId, scope.orgId), eq(dockingItems.dockingId, scope.dockingId)));
-  return { included: Number(row?.included ?? 0), done: Number(row?.done ?? 0) };
 }
 
 /** Each tank's latest countersigned inspection of the docking's vessel (tank_latest_inspections), by tank code. */
@@ -293,7 +259,7 @@ export async function rebuildDocking(v: TDockingScope & { actorUserId: string; g
   return db().transaction(async (tx) => {
     const docking = await lockDocking(tx, v);
     if (!docking) return null;
-    if (isLocked(docking.status)) return { locked: docking.status } as const;
+    if (dockingIsFinal(docking.status)) return { locked: docking.status } as const;
     const changes = await syncItems(tx, v, v.gather(await listWorkSources({ orgId: v.orgId, vesselId: docking.vesselId }, tx)));
     await tx.update(dockings).set({ updatedAt: new Date() }).where(and(eq(dockings.orgId, v.orgId), eq(dockings.id, v.dockingId)));
     await writeAudit(tx, { orgId: v.orgId, actorUserId: v.actorUserId, action: "docking.rebuild", entity: "docking", entityId: v.dockingId, detail: changes });
@@ -301,7 +267,6 @@ export async function rebuildDocking(v: TDockingScope & { actorUserId: string; g
   });
 }
 
-const isLocked = (status: TDockingStatus) => status === "completed" || status === "cancelled";
 
 /** The details a docking is planned with, as PUT /api/v1/dockings/{id} replaces them. */
 const DETAIL_FIELDS = ["yard", "place", "plannedOn", "currency", "steelRatePerKg", "coatingRatePerM2", "anodeRatePerPiece", "sedimentRatePerM3"] as const satisfies readonly (keyof TDockingInput)[];
@@ -317,7 +282,7 @@ export async function updateDocking(v: TDockingScope & { actorUserId: string; in
   return db().transaction(async (tx) => {
     const docking = await lockDocking(tx, v);
     if (!docking) return null;
-    if (isLocked(docking.status)) return { locked: docking.status } as const;
+    if (dockingIsFinal(docking.status)) return { locked: docking.status } as const;
     const changed = DETAIL_FIELDS.filter((f) => docking[f] !== v.input[f]);
     if (!changed.length) return { changed } as const;
     const before = Object.fromEntries(changed.map((f) => [f, docking[f]]));
@@ -338,7 +303,7 @@ export async function addOtherItem(v: TDockingScope & { actorUserId: string; inp
   return db().transaction(async (tx) => {
     const docking = await lockDocking(tx, v);
     if (!docking) return null;
-    if (isLocked(docking.status)) return { locked: docking.status } as const;
+    if (dockingIsFinal(docking.status)) return { locked: docking.status } as const;
     const { tankId, description, quantity, unit, unitRate, reason } = v.input;
     if (tankId) {
       const [tank] = await tx.select({ id: tanks.id }).from(tanks).where(and(eq(tanks.orgId, v.orgId), eq(tanks.vesselId, docking.vesselId), eq(tanks.id, tankId)));
@@ -371,7 +336,7 @@ export async function removeOtherItem(v: TDockingScope & { actorUserId: string; 
   return db().transaction(async (tx) => {
     const docking = await lockDocking(tx, v);
     if (!docking) return null;
-    if (isLocked(docking.status)) return { locked: docking.status } as const;
+    if (dockingIsFinal(docking.status)) return { locked: docking.status } as const;
     const [item] = await tx.select().from(dockingItems).where(and(eq(dockingItems.orgId, v.orgId), eq(dockingItems.dockingId, v.dockingId), eq(dockingItems.id, v.itemId)));
     if (!item) return { unknown: v.itemId } as const;
     if (item.kind !== "other") return { gathered: item.kind } as const;
@@ -438,7 +403,7 @@ export async function decideItems(v: TDockingScope & { actorUserId: string; deci
   return db().transaction(async (tx) => {
     const docking = await lockDocking(tx, v);
     if (!docking) return null;
-    if (isLocked(docking.status)) return { locked: docking.status } as const;
+    if (dockingIsFinal(docking.status)) return { locked: docking.status } as const;
     const ids = v.decisions.map((d) => d.id);
     const rows = await tx.select().from(dockingItems).where(and(eq(dockingItems.orgId, v.orgId), eq(dockingItems.dockingId, v.dockingId), inArray(dockingItems.id, ids)));
     const byId = new Map(rows.map((r) => [r.id, r]));

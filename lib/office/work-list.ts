@@ -15,7 +15,7 @@
 // and may differ by a cent from the sum of the rounded item costs.
 import { AppError } from "@/lib/errors";
 import { totalVolumeM3 } from "@/lib/calc/sediment";
-import { FINDING_TYPE_LABELS, MEMBER_KIND_LABELS, PLATING_REGION_LABELS, REPAIR_KIND_LABELS, type FINDING_STATUSES, type TFindingType, type TMemberKind, type TPlatingRegion, type TRepairKind } from "@/lib/vocabulary";
+import { FINDING_TYPE_LABELS, MEMBER_KIND_LABELS, PLATING_REGION_LABELS, REPAIR_KIND_LABELS, type FINDING_STATUSES, type TDockingStatus, type TFindingType, type TMemberKind, type TPlatingRegion, type TRepairKind } from "@/lib/vocabulary";
 
 /** The kinds gathered from countersigned reports and priced at the docking's rates. */
 export const GATHERED_KINDS = ["steel", "coating", "anodes", "sediment"] as const;
@@ -33,6 +33,9 @@ export const WORK_KIND_LABELS: Record<TWorkKind, string> = {
 };
 export const isGatheredKind = (kind: string): kind is TGatheredKind => (GATHERED_KINDS as readonly string[]).includes(kind);
 export const isWorkKind = (kind: string): kind is TWorkKind => (WORK_KINDS as readonly string[]).includes(kind);
+
+/** A completed or cancelled docking is final: its details and its work list can no longer be changed. */
+export const dockingIsFinal = (status: TDockingStatus) => status === "completed" || status === "cancelled";
 
 // ---------------------------------------------------------------- gathering
 

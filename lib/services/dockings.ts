@@ -56,7 +56,7 @@ const lockedError = (status: string) =>
   new AppError("conflict", `This docking is ${status}: its work list can no longer be changed.`, [{ path: "status", message: `the docking is ${status}` }]);
 
 /** Per-kind sums from the database, in the shape priceKindSums reads, with the count of adjusted items. */
-function kindSumsOf(sums: readonly { kind: string; quantity: number; cost: number; included: number; excluded: number; adjusted: number }[]) {
+function kindSumsOf(sums: Awaited<ReturnType<typeof q.sumDockingItems>>) {
   const byKind = emptyKindSums();
   let adjusted = 0;
   for (const s of sums) {
@@ -71,7 +71,7 @@ function kindSumsOf(sums: readonly { kind: string; quantity: number; cost: numbe
 /** The vessel's dockings, latest planned first, each with its grand total (in its currency) and item counts from the database's sums. */
 export async function listDockingsAs(actor: TActor, vesselId: string) {
   const { orgId, vessel } = await authorizeVessel({ actor, vesselId, allow: DOCKING_PLANNERS });
-  const [rows, sums] = await Promise.all([q.listDockings({ orgId, vesselId }), q.sumItemsOfVesselDockings({ orgId, vesselId })]);
+  const [rows, sums] = await Promise.all([q.listDockings({ orgId, vesselId }), q.sumDockingItems({ orgId, vesselId })]);
   const dockings = rows.map((d) => {
     const { byKind, adjusted } = kindSumsOf(sums.filter((s) => s.dockingId === d.id));
     const { minorUnits, grandTotal, counts } = priceKindSums(byKind, d, adjusted);
@@ -112,7 +112,7 @@ const viewOf = (params: TViewParams) => (params instanceof URLSearchParams ? wor
  * every item), the tanks it was gathered from, and the open findings the yard
  * cannot price (no quantities).
  */
-export async function getDockingAs(actor: TActor, dockingId: string, params: TViewParams = FIRST_PAGE) {
+async function loadDocking(actor: TActor, dockingId: string, params: TViewParams) {
   const { orgId, vessel } = await authorizeDocking(actor, dockingId);
   const view = viewOf(params);
   const offset = (view.page - 1) * view.pageSize;
@@ -131,7 +131,7 @@ export async function getDockingAs(actor: TActor, dockingId: string, params: TVi
   const unpriced = gatherWorkItems(
     sources.map((s) => ({ ...s, findings: candidates.filter((f) => f.inspectionId === s.inspectionId), anodes: null, sedimentZones: [] })),
   ).unpriced;
-  return {
+  const answer = {
     vessel,
     docking,
     workList: { ...priceKindSums(byKind, docking, adjusted), items: priceWorkList(pageItems, docking).items },
@@ -139,13 +139,21 @@ export async function getDockingAs(actor: TActor, dockingId: string, params: TVi
     unpriced,
     sources: sources.map((s) => ({ tankId: s.tankId, tankCode: s.tankCode, inspectionId: s.inspectionId, inspectedOn: s.inspectedOn })),
   };
+  // How far the yard's work has got, over the whole list: included items, and how many of them are done.
+  const progress = { included: sums.reduce((n, s) => n + s.included, 0), done: sums.reduce((n, s) => n + s.done, 0) };
+  return { answer, progress };
 }
 
-/** While the docking is in progress: how many of its included items are done (over the whole list, not one page). */
-export async function readDockingProgressAs(actor: TActor, dockingId: string) {
-  const { orgId } = await authorizeDocking(actor, dockingId);
-  return q.countDoneItems({ orgId, dockingId });
+export async function getDockingAs(actor: TActor, dockingId: string, params: TViewParams = FIRST_PAGE) {
+  return (await loadDocking(actor, dockingId, params)).answer;
 }
+
+/** For the work list page: the same docking and page, with the yard's progress (not part of the API's answer). */
+export async function getDockingPageAs(actor: TActor, dockingId: string, params: TViewParams = FIRST_PAGE) {
+  const { answer, progress } = await loadDocking(actor, dockingId, params);
+  return { ...answer, progress };
+}
+
 
 /** Include, exclude or adjust items; every exclusion and adjustment needs a reason, and each change is audit-logged. */
 export async function decideDockingItemsAs(actor: TActor, dockingId: string, body: unknown, params: TViewParams = FIRST_PAGE) {

@@ -9,7 +9,8 @@ import { Pager } from "@/components/ui/pager";
 import { pageActor, pageAuthorize } from "@/lib/auth/page";
 import { formatMoney } from "@/lib/format";
 import { workListQueryFromParams } from "@/lib/schemas/docking";
-import { getDockingAs, readDockingProgressAs } from "@/lib/services/dockings";
+import { dockingIsFinal } from "@/lib/office/work-list";
+import { getDockingPageAs } from "@/lib/services/dockings";
 import { readVesselTanks } from "@/lib/services/tanks";
 import { DOCKING_STATUS_LABELS } from "@/lib/vocabulary";
 
@@ -22,7 +23,7 @@ export default async function WorkListPage({ params, searchParams }: { params: P
   const actor = await pageActor();
   const asked = workListQueryFromParams(await searchParams);
   const view = asked.success ? asked.data : { page: 1, pageSize: 100 };
-  const { vessel, docking, workList, paging, unpriced, sources } = await pageAuthorize(() => getDockingAs(actor, dockingId, view));
+  const { vessel, docking, workList, paging, unpriced, sources, progress: allProgress } = await pageAuthorize(() => getDockingPageAs(actor, dockingId, view));
   // Any tank of the vessel may carry hand-added work, not only the tanks with a countersigned report.
   const { tanks } = await readVesselTanks(actor, vessel.id);
   const hrefFor = (page: number, tank = paging.tank) => {
@@ -37,8 +38,8 @@ export default async function WorkListPage({ params, searchParams }: { params: P
   const rate = (n: number) => formatMoney(n, docking.currency, { rate: true });
   // The editor keeps the list it was given: new rates (saved above it) give it the list priced again.
   const ratesKey = [docking.currency, docking.steelRatePerKg, docking.coatingRatePerM2, docking.anodeRatePerPiece, docking.sedimentRatePerM3].join(":");
-  const locked = docking.status === "completed" || docking.status === "cancelled";
-  const progress = docking.status === "in_progress" ? await readDockingProgressAs(actor, docking.id) : null;
+  const locked = dockingIsFinal(docking.status);
+  const progress = docking.status === "in_progress" ? allProgress : null;
   return (
     <>
       <PageHeader
