@@ -9,7 +9,7 @@ import { fillInspection } from "@/db/seed/complete-inspection";
 import { repairQuantities } from "@/lib/inspection/quantities";
 import { signIn, type TClient } from "../fixtures/http";
 import { pdfText } from "../fixtures/pdf";
-import { pdfTextRuns } from "../fixtures/pdf-text-runs";
+import { pdfItems } from "../fixtures/pdf-items";
 import { buildScenario, PASSWORD, testDb, type TScenario } from "../fixtures/scenario";
 
 let s: TScenario;
@@ -274,7 +274,7 @@ describe("deciding on items", () => {
     expect(text).not.toContain("42.60 USD");
     // The tank code and the work are drawn apart on every item row: the tank's own run of text
     // ends left of the work's first line, on the same baseline, with a gap.
-    const runs = await pdfTextRuns(new Uint8Array(await (await superintendent.request(`/api/v1/dockings/${dockingId}/work-list.pdf`)).arrayBuffer()));
+    const runs = await pdfItems(new Uint8Array(await (await superintendent.request(`/api/v1/dockings/${dockingId}/work-list.pdf`)).arrayBuffer()));
     const works = runs.filter((r) => /^(Finding \d+:|Anodes to renew|Sediment removal,)/.test(r.str));
     expect(works).toHaveLength(6); // 6 items, worked at the top of this file
     for (const work of works) {
