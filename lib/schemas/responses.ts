@@ -52,7 +52,8 @@ export const ZErrorBody = z
 
 // ---------------------------------------------------------------- vessels and tanks
 
-export const ZVesselSummary = z.strictObject({
+/** What every vessel answer says of the vessel. */
+const vesselIdentity = {
   id: ZId,
   orgId: ZId,
   name: z.string(),
@@ -60,21 +61,16 @@ export const ZVesselSummary = z.strictObject({
   vesselType: z.enum(VESSEL_TYPES),
   flag: z.string().nullable(),
   classSociety: z.string().nullable(),
-  tankCount: ZCount,
-});
+};
+
+export const ZVesselSummary = z.strictObject({ ...vesselIdentity, tankCount: ZCount });
 
 /** GET /api/v1/vessels */
 export const ZVesselList = z.strictObject({ vessels: z.array(ZVesselSummary).describe("By name.") });
 
 /** A vessel's particulars as stored. */
 export const ZVesselRecord = z.strictObject({
-  id: ZId,
-  orgId: ZId,
-  name: z.string(),
-  imoNumber: z.string().regex(/^[0-9]{7}$/),
-  vesselType: z.enum(VESSEL_TYPES),
-  flag: z.string().nullable(),
-  classSociety: z.string().nullable(),
+  ...vesselIdentity,
   yearBuilt: z.number().int().nullable(),
   frameFirst: z.number().int(),
   frameLast: z.number().int(),
